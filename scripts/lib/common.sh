@@ -1,0 +1,135 @@
+# Shared steps of start, test and the other scripts. Sourced, not run.
+# Every helper is idempotent: run twice, it changes nothing the second time.
+
+ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/../.." && pwd)"
+cd "$ROOT"
+
+DATA_DIR="$ROOT/.data"
+PGPORT="${PGPORT:-54329}"
+PG_DIR="$DATA_DIR/pg"
+PG_SOCKET_DIR="$DATA_DIR/pg-socket"
+PG_LOG="$DATA_DIR/pg.log"
+export EXPO_OFFLINE=1 EXPO_NO_TELEMETRY=1 EXPO_NO_NEW_ARCH_COMPAT_CHECK=1 EXPO_UNSTABLE_HEADLESS=1
+
+say() { printf '\033[1m[strapsift]\033[0m %s\n' "$*" >&2; }
+die() { printf '\033[31m[strapsift] %s\033[0m\n' "$*" >&2; exit 1; }
+
+as_root() { [ "$(id -u)" = 0 ]; }
+
+apt_install() {
+  as_root || die "Missing Debian packages ($*); run: sudo apt-get install -y $*"
+  say "installing Debian packages: $*"
+  if ! DEBIAN_FRONTEND=noninteractive apt-get install -y -q "$@" >"$DATA_DIR/apt.log" 2>&1; then
+    apt-get update -q >>"$DATA_DIR/apt.log" 2>&1 || true
+    DEBIAN_FRONTEND=noninteractive apt-get install -y -q "$@" >>"$DATA_DIR/apt.log" 2>&1 \
+      || die "apt-get install $* failed; see $DATA_DIR/apt.log"
+  fi
+}
+
+# npm ci when node_modules is missing or older than the lock file.
+ensure_node_modules() {
+  mkdir -p "$DATA_DIR"
+  local stamp="node_modules/.strapsift-installed"
+  if [ ! -f "$stamp" ] || [ package-lock.json -nt "$stamp" ] || [ package.json -nt "$stamp" ]; then
+    say "installing dependencies (npm ci)"
+    npm ci --no-audit --no-fund --loglevel=error || die "npm ci failed"
+    touch "$stamp"
+  fi
+}
+
+pg_bin() {
+  local found
+  found="$(ls -d /usr/lib/postgresql/*/bin 2>/dev/null | sort -V | tail -1)"
+  if [ -z "$found" ] || [ ! -x "$found/initdb" ]; then
+    apt_install postgresql >&2
+    found="$(ls -d /usr/lib/postgresql/*/bin 2>/dev/null | sort -V | tail -1)"
+    [ -x "$found/initdb" ] || die "PostgreSQL binaries not found after install"
+  fi
+  echo "$found"
+}
+
+# Runs a PostgreSQL tool as the postgres user when we are root (initdb refuses root).
+pg_run() {
+  if as_root; then runuser -u postgres -- "$@"; else "$@"; fi
+}
+
+PG_STARTED_HERE=0
+ensure_postgres() {
+  mkdir -p "$DATA_DIR"
+  local bin
+  bin="$(pg_bin)"
+  PG_BIN="$bin"
+  if [ ! -f "$PG_DIR/PG_VERSION" ]; then
+    say "creating a project-local PostgreSQL cluster in .data/pg"
+    mkdir -p "$PG_DIR" "$PG_SOCKET_DIR"
+    if as_root; then
+      chown postgres:postgres "$PG_DIR" "$PG_SOCKET_DIR"
+      chmod 700 "$PG_DIR"
+      # Every parent must be traversable by the postgres user.
+      local dir="$DATA_DIR"
+      while [ "$dir" != "/" ]; do chmod o+x "$dir" 2>/dev/null || true; dir="$(dirname "$dir")"; done
+    fi
+    pg_run "$bin/initdb" -D "$PG_DIR" -U postgres --auth=trust -E UTF8 --locale=C.UTF-8 >"$DATA_DIR/initdb.log" 2>&1 \
+      || die "initdb failed; see .data/initdb.log"
+  fi
+  mkdir -p "$PG_SOCKET_DIR"
+  as_root && chown postgres:postgres "$PG_SOCKET_DIR"
+  if pg_run "$bin/pg_ctl" -D "$PG_DIR" status >/dev/null 2>&1; then
+    return 0
+  fi
+  touch "$PG_LOG"; as_root && chown postgres:postgres "$PG_LOG"
+  say "starting PostgreSQL on 127.0.0.1:$PGPORT"
+  pg_run "$bin/pg_ctl" -D "$PG_DIR" -l "$PG_LOG" -w -t 60 \
+    -o "-p $PGPORT -k $PG_SOCKET_DIR -c listen_addresses=127.0.0.1 -c fsync=on" start >/dev/null \
+    || die "PostgreSQL did not start; see .data/pg.log"
+  PG_STARTED_HERE=1
+}
+
+stop_postgres_if_started() {
+  if [ "$PG_STARTED_HERE" = 1 ]; then
+    say "stopping PostgreSQL"
+    pg_run "$PG_BIN/pg_ctl" -D "$PG_DIR" -m fast -w stop >/dev/null 2>&1 || true
+    PG_STARTED_HERE=0
+  fi
+}
+
+psql_admin() {
+  "$PG_BIN/psql" -h 127.0.0.1 -p "$PGPORT" -U postgres -d postgres -v ON_ERROR_STOP=1 -qtA "$@"
+}
+
+ensure_database() {
+  local name="$1"
+  if [ "$(psql_admin -c "SELECT 1 FROM pg_database WHERE datname = '$name'")" != "1" ]; then
+    say "creating database $name"
+    psql_admin -c "CREATE DATABASE \"$name\"" >/dev/null
+  fi
+}
+
+recreate_database() {
+  local name="$1"
+  psql_admin -c "DROP DATABASE IF EXISTS \"$name\" WITH (FORCE)" >/dev/null
+  psql_admin -c "CREATE DATABASE \"$name\"" >/dev/null
+}
+
+database_url() { echo "postgres://postgres@127.0.0.1:$PGPORT/$1"; }
+
+run_migrations() {
+  node --import tsx node_modules/typeorm/cli.js migration:run -d server/db/data-source.ts >"$DATA_DIR/migrate.log" 2>&1 \
+    || { cat "$DATA_DIR/migrate.log" >&2; die "migrations failed"; }
+}
+
+# The web export is slow (about a minute cold), so it only runs when a client file changed.
+ensure_web_export() {
+  local stamp="dist/.strapsift-export"
+  if [ -f "$stamp" ] && [ -z "$(find app src shared assets app.json babel.config.js package-lock.json scripts/web-export.sh scripts/web \
+        -newer "$stamp" -type f -print -quit 2>/dev/null)" ]; then
+    return 0
+  fi
+  bash scripts/web-export.sh || die "web export failed"
+}
+
+ensure_chromium() {
+  if [ ! -x /usr/bin/chromium ]; then
+    apt_install chromium
+  fi
+}

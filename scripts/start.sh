@@ -1,0 +1,50 @@
+#!/usr/bin/env bash
+# npm start: everything a fresh clone needs, then the app at http://127.0.0.1:8080.
+set -euo pipefail
+source "$(dirname "$0")/lib/common.sh"
+
+PIDS=()
+cleanup() {
+  trap - EXIT INT TERM
+  for pid in "${PIDS[@]:-}"; do
+    [ -n "$pid" ] && kill "$pid" 2>/dev/null && wait "$pid" 2>/dev/null || true
+  done
+  stop_postgres_if_started
+}
+trap cleanup EXIT
+trap 'exit 130' INT TERM
+
+ensure_node_modules
+ensure_postgres
+ensure_database strapsift
+export DATABASE_URL="${DATABASE_URL:-$(database_url strapsift)}"
+export PORT="${PORT:-8080}" HOST="${HOST:-127.0.0.1}"
+export NODE_ENV="${NODE_ENV:-development}"
+run_migrations
+say "seeding demo data"
+node_modules/.bin/tsx server/db/seed/run-seed.ts || die "seeding failed"
+ensure_web_export
+
+if [ -f scripts/fakes.ts ]; then
+  node_modules/.bin/tsx scripts/fakes.ts &
+  PIDS+=($!)
+fi
+
+node_modules/.bin/tsx server/main.ts &
+SERVER_PID=$!
+PIDS+=($SERVER_PID)
+
+for _ in $(seq 1 100); do
+  if curl -fs "http://$HOST:$PORT/api/health" >/dev/null 2>&1; then break; fi
+  kill -0 "$SERVER_PID" 2>/dev/null || die "the server stopped during start-up"
+  sleep 0.2
+done
+cat >&2 <<MSG
+
+  Strapsift is running at  http://$HOST:$PORT
+  Demo collector:          demo@strapsift.test  /  sift-demo-2026
+  Demo admin:              admin@strapsift.test /  console-demo-2026
+  Press Ctrl-C to stop (the server and the PostgreSQL this command started).
+
+MSG
+wait "$SERVER_PID"

@@ -1,0 +1,58 @@
+#!/usr/bin/env bash
+# npm test: the same preparation as npm start, with throwaway databases, then every test.
+# Ends with one plain line "N passed, N failed" that CI reads.
+set -uo pipefail
+source "$(dirname "$0")/lib/common.sh"
+
+PIDS=()
+cleanup() {
+  trap - EXIT INT TERM
+  for pid in "${PIDS[@]:-}"; do
+    [ -n "$pid" ] && kill "$pid" 2>/dev/null && wait "$pid" 2>/dev/null || true
+  done
+  stop_postgres_if_started
+}
+trap cleanup EXIT
+trap 'exit 130' INT TERM
+
+set -e
+ensure_node_modules
+ensure_postgres
+ensure_chromium
+mkdir -p test-results
+
+# Each suite gets a fresh database so runs never depend on each other.
+for db in strapsift_test strapsift_migrations strapsift_e2e; do recreate_database "$db"; done
+export NODE_ENV=test LOG_LEVEL="${LOG_LEVEL:-silent}"
+export TEST_DATABASE_URL="$(database_url strapsift_test)"
+export MIGRATIONS_DATABASE_URL="$(database_url strapsift_migrations)"
+DATABASE_URL="$TEST_DATABASE_URL" run_migrations
+
+ensure_web_export
+
+# The browser tests run against a real served app with demo data, as a user would meet it.
+E2E_PORT="${E2E_PORT:-8091}"
+E2E_DB_URL="$(database_url strapsift_e2e)"
+DATABASE_URL="$E2E_DB_URL" run_migrations
+DATABASE_URL="$E2E_DB_URL" node_modules/.bin/tsx server/db/seed/run-seed.ts >"$DATA_DIR/e2e-seed.log" 2>&1 \
+  || { cat "$DATA_DIR/e2e-seed.log" >&2; die "seeding the browser-test database failed"; }
+if [ -f scripts/fakes.ts ]; then
+  FAKES_PREFIX=e2e node_modules/.bin/tsx scripts/fakes.ts >"$DATA_DIR/e2e-fakes.log" 2>&1 &
+  PIDS+=($!)
+fi
+DATABASE_URL="$E2E_DB_URL" PORT="$E2E_PORT" HOST=127.0.0.1 node_modules/.bin/tsx server/main.ts >"$DATA_DIR/e2e-server.log" 2>&1 &
+PIDS+=($!)
+E2E_SERVER_PID=$!
+for _ in $(seq 1 150); do
+  curl -fs "http://127.0.0.1:$E2E_PORT/api/health" >/dev/null 2>&1 && break
+  kill -0 "$E2E_SERVER_PID" 2>/dev/null || { cat "$DATA_DIR/e2e-server.log" >&2; die "the browser-test server did not start"; }
+  sleep 0.2
+done
+export E2E_BASE_URL="http://127.0.0.1:$E2E_PORT"
+set +e
+
+rm -f test-results/vitest.json
+node_modules/.bin/vitest run --reporter=default --reporter=json --outputFile.json=test-results/vitest.json "$@"
+status=$?
+node scripts/lib/summarise-tests.mjs test-results/vitest.json || status=1
+exit $status
