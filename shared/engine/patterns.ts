@@ -1,0 +1,118 @@
+import { ALL_BITS, BIT, PATTERN_ORDER, maskToIds } from './_lib/pattern-bits';
+import { digitTables } from './_lib/digit-tables';
+import { serialValue } from './_lib/serial-value';
+import type { LowLimit, PatternId, SerialInput } from './types';
+
+/** Every pattern id in canonical order (rarest-looking first, bands last). */
+export const PATTERN_IDS: readonly PatternId[] = PATTERN_ORDER;
+
+/** Display names, as a hunter says them. */
+export const PATTERN_NAMES: Readonly<Record<PatternId, string>> = {
+  solid: 'solid',
+  ladder: 'ladder',
+  radar: 'radar',
+  repeater: 'repeater',
+  'super-repeater': 'super repeater',
+  rotator: 'rotator',
+  binary: 'binary',
+  trinary: 'trinary',
+  low: 'low serial',
+  high: 'high serial',
+};
+
+/** One-line definitions the app can show beside each pattern. */
+export const PATTERN_DEFINITIONS: Readonly<Record<PatternId, string>> = {
+  solid: 'all eight digits the same, e.g. 44444444',
+  ladder: 'steps of +1 or −1 through all eight digits: 01234567, 12345678, 23456789 and the same backwards',
+  radar: 'reads the same backwards (a palindrome), e.g. 38055083',
+  repeater: 'the first four digits repeated, e.g. 47104710',
+  'super-repeater': 'one two-digit block four times, e.g. 27272727',
+  rotator: 'reads the same turned 180°: digits 0 1 6 8 9 only, with 6 and 9 trading places, e.g. 10688901',
+  binary: 'exactly two different digits, e.g. 30033303',
+  trinary: 'exactly three different digits, e.g. 52252922',
+  low: 'at or below the low limit (9, 99, 999, 9,999 or 99,999; 999 unless the weight table says otherwise)',
+  high: 'at or above 99,990,000',
+};
+
+/** The low limits a weight table may choose, smallest first. */
+export const LOW_LIMITS: readonly LowLimit[] = [9, 99, 999, 9999, 99999];
+
+export const DEFAULT_LOW_LIMIT: LowLimit = 999;
+
+/** Smallest high serial. */
+export const HIGH_FROM = 99_990_000;
+
+/** The six ladders, ascending. */
+export const LADDERS: readonly number[] = [1234567, 12345678, 23456789, 76543210, 87654321, 98765432];
+
+/** True when `value` is one of the allowed low limits. */
+export function isLowLimit(value: unknown): value is LowLimit {
+  return value === 9 || value === 99 || value === 999 || value === 9999 || value === 99999;
+}
+
+/**
+ * The pattern bit mask of a serial value (1…99,999,999), without building any
+ * string or array: the hot path under `classify`, `sweep` and the census.
+ * Bit order is PATTERN_IDS. The caller guarantees the value is a serial.
+ *
+ * @example
+ * patternMask(12121212, 999) // bits of repeater, super-repeater, binary
+ */
+export function patternMask(value: number, lowLimit: number = DEFAULT_LOW_LIMIT): number {
+  const t = digitTables();
+  const hi = (value / 10000) | 0;
+  const lo = value - hi * 10000;
+  const distinct = t.popcount[t.digitMask[hi]! | t.digitMask[lo]!]!;
+  let mask = 0;
+  if (distinct === 1) mask = BIT.solid;
+  else if (distinct === 2) mask = BIT.binary;
+  else if (distinct === 3) mask = BIT.trinary;
+  else if (distinct === 8) {
+    if (
+      value === 12345678 ||
+      value === 23456789 ||
+      value === 1234567 ||
+      value === 98765432 ||
+      value === 87654321 ||
+      value === 76543210
+    ) {
+      mask = BIT.ladder;
+    }
+  }
+  if (t.reversed[hi] === lo) mask |= BIT.radar;
+  if (hi === lo) {
+    mask |= BIT.repeater;
+    if (hi % 101 === 0) mask |= BIT['super-repeater'];
+  }
+  if (t.turned[hi] === lo) mask |= BIT.rotator;
+  if (value <= lowLimit) mask |= BIT.low;
+  if (value >= HIGH_FROM) mask |= BIT.high;
+  return mask & ALL_BITS;
+}
+
+/**
+ * The patterns a serial has, in PATTERN_IDS order. Throws RangeError when the
+ * input is not 8 digits / a number 1…99,999,999 (user text goes through `read`).
+ *
+ * @example
+ * classify('12121212') // ['repeater', 'super-repeater', 'binary']
+ * classify('00000500') // ['binary', 'low']
+ * classify('00000500', { lowLimit: 99 }) // ['binary']
+ */
+export function classify(digits: SerialInput, options: { lowLimit?: LowLimit } = {}): PatternId[] {
+  const value = serialValue(digits, 'classify');
+  return maskToIds(patternMask(value, options.lowLimit ?? DEFAULT_LOW_LIMIT));
+}
+
+/**
+ * True when the serial has the pattern.
+ *
+ * @example
+ * hasPattern('10688901', 'rotator') // true
+ */
+export function hasPattern(digits: SerialInput, pattern: PatternId, options: { lowLimit?: LowLimit } = {}): boolean {
+  const value = serialValue(digits, 'hasPattern');
+  const bit = BIT[pattern];
+  if (bit === undefined) throw new RangeError(`hasPattern: unknown pattern ${String(pattern)}`);
+  return (patternMask(value, options.lowLimit ?? DEFAULT_LOW_LIMIT) & bit) !== 0;
+}

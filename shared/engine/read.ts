@@ -1,0 +1,103 @@
+import { maskToIds } from './_lib/pattern-bits';
+import { DOMAIN_LAST } from './_lib/serial-value';
+import { tradeNotes } from '../trade/notes';
+import { featuresOfValue } from './features';
+import { nearMissesOfValue } from './near-miss';
+import { neighboursOfValue } from './neighbours';
+import { readingOddsOfMask } from './odds';
+import { parseSerial } from './parse';
+import { DEFAULT_LOW_LIMIT, isLowLimit, patternMask } from './patterns';
+import { DEFAULT_WEIGHTS, score } from './score';
+import type { LowLimit, NeighbourPatternId, Neighbours, ReadOptions, ReadResult, WatchPattern, WatchResult } from './types';
+import { parseWatchPattern, validWatchPattern, watchResultOfValue } from './watch';
+
+function watchList(items: ReadOptions['watch']): WatchPattern[] {
+  if (!Array.isArray(items)) return [];
+  const list: WatchPattern[] = [];
+  for (const item of items) {
+    if (typeof item === 'string') {
+      const parsed = parseWatchPattern(item);
+      if (parsed.ok) list.push(parsed.pattern);
+    } else {
+      const valid = validWatchPattern(item);
+      if (valid) list.push(valid);
+    }
+  }
+  return list;
+}
+
+function neighboursOf(value: number): Record<NeighbourPatternId, Neighbours> {
+  return {
+    solid: neighboursOfValue(value, 'solid'),
+    ladder: neighboursOfValue(value, 'ladder'),
+    radar: neighboursOfValue(value, 'radar'),
+    repeater: neighboursOfValue(value, 'repeater'),
+    'super-repeater': neighboursOfValue(value, 'super-repeater'),
+    rotator: neighboursOfValue(value, 'rotator'),
+    binary: neighboursOfValue(value, 'binary'),
+    trinary: neighboursOfValue(value, 'trinary'),
+  };
+}
+
+/**
+ * The full reading of one serial as a hunter types it: parts, patterns,
+ * features, near misses, neighbours, exact odds, watch-pattern results, score
+ * and the trade notes that apply. Never throws: text that is not a serial
+ * gives `{ ok: false, input, error }`, and options that make no sense are
+ * ignored (an unknown low limit or domain falls back to the default, a bad
+ * watch pattern is skipped: validate them with `parseWatchPattern` when saved).
+ * The low limit is `options.lowLimit`, else the weight table's, else 999.
+ *
+ * @example
+ * const r = read('LB 1212 1212 A');
+ * r.ok && r.patterns // ['repeater', 'super-repeater', 'binary']
+ * r.ok && r.district // 'B'
+ * read('1234').ok // false
+ */
+export function read(input: string, options: ReadOptions = {}): ReadResult {
+  const parsed = parseSerial(input);
+  const text = typeof input === 'string' ? input : String(input);
+  if (!parsed.ok) return { ok: false, input: text, error: parsed.error };
+  const opts: ReadOptions = options !== null && typeof options === 'object' ? options : {};
+  const weights = opts.weights !== null && typeof opts.weights === 'object' ? opts.weights : DEFAULT_WEIGHTS;
+  const lowLimit: LowLimit = isLowLimit(opts.lowLimit)
+    ? opts.lowLimit
+    : isLowLimit(weights.lowLimit)
+      ? weights.lowLimit
+      : DEFAULT_LOW_LIMIT;
+  const domainLast =
+    Number.isInteger(opts.domainLast) && opts.domainLast! >= 1 && opts.domainLast! <= DOMAIN_LAST ? opts.domainLast! : DOMAIN_LAST;
+  const value = parsed.value;
+  const mask = patternMask(value, lowLimit);
+  const patterns = maskToIds(mask);
+  const feats = featuresOfValue(value);
+  const star = parsed.star || opts.star === true;
+  const watch: WatchResult[] = watchList(opts.watch).map((p) => watchResultOfValue(value, p));
+  const district = typeof opts.district === 'string' && opts.district !== '' ? opts.district.toUpperCase() : parsed.district;
+  return {
+    ok: true,
+    input: text,
+    digits: parsed.digits,
+    value,
+    prefix: parsed.prefix,
+    suffix: parsed.suffix,
+    star,
+    district,
+    lowLimit,
+    patterns,
+    ...feats,
+    nearMiss: nearMissesOfValue(value),
+    neighbours: neighboursOf(value),
+    odds: readingOddsOfMask(mask, { lowLimit, domainLast }),
+    watch,
+    // Score against the same low limit the reading used, so its lines match the badges.
+    score: score({ value, patterns, longestRun: feats.longestRun, maxDigitCount: feats.maxDigitCount, star, watch }, { ...weights, lowLimit }),
+    trade: tradeNotes({
+      series: typeof opts.series === 'string' ? opts.series : undefined,
+      district,
+      facility: opts.facility === 'DC' || opts.facility === 'FW' ? opts.facility : undefined,
+      star,
+      denomination: typeof opts.denomination === 'number' ? opts.denomination : undefined,
+    }),
+  };
+}
