@@ -3,10 +3,14 @@ import express, { type Express } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import type { DataSource } from 'typeorm';
+import { authRoutes } from './features/auth/auth.routes';
 import { healthRoutes } from './features/health/health.routes';
+import { usersRoutes } from './features/users/users.routes';
+import { requireAuth } from './lib/auth-middleware';
 import { apiNotFound, errorHandler } from './lib/errors';
 import { logger } from './lib/logger';
 import { webAppRoutes } from './lib/web-app';
+import { createServices } from './services';
 
 export interface AppOptions {
   dataSource: DataSource;
@@ -37,7 +41,11 @@ export function createApp({ dataSource, webDist }: AppOptions): Express {
 
   const api = express.Router();
   api.use(express.json({ limit: '2mb' }));
+  const services = createServices(dataSource);
+  const authed = requireAuth(dataSource);
   api.use(healthRoutes(dataSource));
+  api.use(authRoutes(services.auth));
+  api.use(usersRoutes(services.users, authed));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -1,0 +1,1 @@
+export { ConsoleScreen as default } from '@/features/console/console-screen';

@@ -1,0 +1,1 @@
+export { HuntScreen as default } from '@/features/hunts/hunt-screen';

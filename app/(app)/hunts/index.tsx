@@ -1,0 +1,1 @@
+export { HuntsScreen as default } from '@/features/hunts/hunts-screen';

@@ -1,0 +1,1 @@
+export { KeeperScreen as default } from '@/features/keepers/keeper-screen';

@@ -1,0 +1,1 @@
+export { KeepersScreen as default } from '@/features/keepers/keepers-screen';

@@ -1,0 +1,1 @@
+export { OddsScreen as default } from '@/features/odds/odds-screen';

@@ -1,0 +1,1 @@
+export { SiftScreen as default } from '@/features/sift/sift-screen';

@@ -1,0 +1,1 @@
+export { SweepScreen as default } from '@/features/sweep/sweep-screen';

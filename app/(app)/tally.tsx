@@ -1,0 +1,1 @@
+export { TallyScreen as default } from '@/features/tally/tally-screen';

@@ -1,0 +1,1 @@
+export { CreateAccountScreen as default } from '@/features/auth/create-account-screen';

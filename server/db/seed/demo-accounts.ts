@@ -1,0 +1,12 @@
+// Invented people for the demo; the README shows these sign-ins.
+export const DEMO_COLLECTOR = {
+  email: 'demo@strapsift.test',
+  password: 'sift-demo-2026',
+  displayName: 'Wren Halloway',
+} as const;
+
+export const DEMO_ADMIN = {
+  email: 'admin@strapsift.test',
+  password: 'console-demo-2026',
+  displayName: 'Ostin Pell',
+} as const;

@@ -1,0 +1,88 @@
+import type { z } from 'zod';
+import { ApiError } from './api-error';
+
+export { ApiError };
+
+type TokenSource = {
+  getAccessToken(): string | null;
+  /** Called once on a 401; returns a fresh token or null when the session is over. */
+  refresh(): Promise<string | null>;
+  onSignedOut(): void;
+};
+
+let tokens: TokenSource = {
+  getAccessToken: () => null,
+  refresh: async () => null,
+  onSignedOut: () => undefined,
+};
+
+/** The session provider plugs itself in here, so the client never imports React state. */
+export function connectTokenSource(source: TokenSource): void {
+  tokens = source;
+}
+
+// Same origin on the web export; a native build sets EXPO_PUBLIC_API_URL.
+const baseUrl = (process.env.EXPO_PUBLIC_API_URL ?? '').replace(/\/$/, '');
+
+export interface RequestOptions<T> {
+  method?: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
+  body?: unknown;
+  /** The shared zod contract of the answer; a mismatch is reported, never passed on silently. */
+  schema?: z.ZodType<T>;
+  signal?: AbortSignal;
+  /** Send without the Authorization header (sign-in, register). */
+  anonymous?: boolean;
+  /** Raw body such as FormData; sent as is. */
+  rawBody?: BodyInit;
+}
+
+async function send(path: string, options: RequestOptions<unknown>, token: string | null): Promise<Response> {
+  const headers: Record<string, string> = { Accept: 'application/json' };
+  if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+  if (token && !options.anonymous) headers.Authorization = `Bearer ${token}`;
+  try {
+    return await fetch(`${baseUrl}/api${path}`, {
+      method: options.method ?? (options.body !== undefined || options.rawBody ? 'POST' : 'GET'),
+      headers,
+      body: options.rawBody ?? (options.body !== undefined ? JSON.stringify(options.body) : undefined),
+      signal: options.signal,
+    });
+  } catch (error) {
+    if ((error as Error)?.name === 'AbortError') throw error;
+    throw new ApiError(0, 'offline', 'No connection to Strapsift right now');
+  }
+}
+
+/** The one typed way to call the API. Components call hooks that call this; nothing else calls fetch. */
+export async function api<T = unknown>(path: string, options: RequestOptions<T> = {}): Promise<T> {
+  let response = await send(path, options as RequestOptions<unknown>, tokens.getAccessToken());
+  if (response.status === 401 && !options.anonymous) {
+    const fresh = await tokens.refresh();
+    if (fresh) response = await send(path, options as RequestOptions<unknown>, fresh);
+    if (response.status === 401) tokens.onSignedOut();
+  }
+  const text = await response.text();
+  let payload: unknown = null;
+  if (text) {
+    try {
+      payload = JSON.parse(text);
+    } catch {
+      payload = null;
+    }
+  }
+  if (!response.ok) {
+    const error = (payload as { error?: { code?: string; message?: string; fields?: Record<string, string> } } | null)?.error;
+    throw new ApiError(
+      response.status,
+      error?.code ?? 'http_error',
+      error?.message ?? `The server answered ${response.status}`,
+      error?.fields ?? {},
+    );
+  }
+  if (!options.schema) return payload as T;
+  const parsed = options.schema.safeParse(payload);
+  if (!parsed.success) {
+    throw new ApiError(response.status, 'bad_response', 'The server sent an answer this version of the app does not understand');
+  }
+  return parsed.data;
+}

@@ -1,0 +1,60 @@
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
+
+export const PHONE = { width: 390, height: 844 } as const;
+export const WIDE = { width: 1440, height: 900 } as const;
+
+export function baseUrl(): string {
+  const url = process.env.E2E_BASE_URL;
+  if (!url) throw new Error('E2E_BASE_URL is not set; run the browser tests with `npm test`');
+  return url;
+}
+
+export interface BrowserSession {
+  context: BrowserContext;
+  page: Page;
+  close(): Promise<void>;
+}
+
+/**
+ * Debian's Chromium through playwright-core, with the flags this closed network needs
+ * (no background networking, no component updates) and a throwaway profile.
+ */
+export async function openBrowser(viewport: { width: number; height: number }): Promise<BrowserSession> {
+  const profile = mkdtempSync(join(tmpdir(), 'strapsift-chromium-'));
+  const context = await chromium.launchPersistentContext(profile, {
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    headless: true,
+    viewport,
+    deviceScaleFactor: 1,
+    args: [
+      '--headless',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
+  });
+  const page = context.pages()[0] ?? (await context.newPage());
+  return {
+    context,
+    page,
+    async close() {
+      await context.close();
+      rmSync(profile, { recursive: true, force: true });
+    },
+  };
+}
+
+export async function signInAsDemo(page: Page, account = { email: 'demo@strapsift.test', password: 'sift-demo-2026' }): Promise<void> {
+  await page.goto(`${baseUrl()}/sign-in`);
+  await page.getByTestId('sign-in-email').fill(account.email);
+  await page.getByTestId('sign-in-password').fill(account.password);
+  await page.getByTestId('sign-in-submit').click();
+  await page.waitForURL(/\/sift/);
+}
