@@ -18,21 +18,26 @@ trap 'exit 130' INT TERM
 set -e
 ensure_node_modules
 ensure_postgres
-ensure_chromium
+[ "${QUICK:-0}" = 1 ] || ensure_chromium
 mkdir -p test-results
 
 # Each suite gets a fresh database so runs never depend on each other.
-for db in strapsift_test strapsift_migrations strapsift_e2e; do recreate_database "$db"; done
+# TEST_DB_PREFIX lets two checkouts share one cluster without touching each other's databases.
+P="${TEST_DB_PREFIX:-strapsift}"
+for db in "${P}_test" "${P}_migrations" "${P}_e2e"; do recreate_database "$db"; done
 export NODE_ENV=test LOG_LEVEL="${LOG_LEVEL:-silent}"
-export TEST_DATABASE_URL="$(database_url strapsift_test)"
-export MIGRATIONS_DATABASE_URL="$(database_url strapsift_migrations)"
+export TEST_DATABASE_URL="$(database_url "${P}_test")"
+export MIGRATIONS_DATABASE_URL="$(database_url "${P}_migrations")"
 DATABASE_URL="$TEST_DATABASE_URL" run_migrations
 
+# QUICK=1 skips the web export and the served app, for a fast loop on engine or server tests
+# (pass a project too: QUICK=1 npm test -- --project server). CI never sets it.
+if [ "${QUICK:-0}" != 1 ]; then
 ensure_web_export
 
 # The browser tests run against a real served app with demo data, as a user would meet it.
 E2E_PORT="${E2E_PORT:-8091}"
-E2E_DB_URL="$(database_url strapsift_e2e)"
+E2E_DB_URL="$(database_url "${P}_e2e")"
 DATABASE_URL="$E2E_DB_URL" run_migrations
 DATABASE_URL="$E2E_DB_URL" node_modules/.bin/tsx server/db/seed/run-seed.ts >"$DATA_DIR/e2e-seed.log" 2>&1 \
   || { cat "$DATA_DIR/e2e-seed.log" >&2; die "seeding the browser-test database failed"; }
@@ -49,6 +54,7 @@ for _ in $(seq 1 150); do
   sleep 0.2
 done
 export E2E_BASE_URL="http://127.0.0.1:$E2E_PORT"
+fi
 set +e
 
 rm -f test-results/vitest.json
