@@ -203,12 +203,12 @@ function rangeMiss(d: readonly number[], from: number, to: number): NearMiss {
   let tightLo = true;
   let tightHi = true;
   for (let pos = 0; pos < 8; pos++) {
-    const first = tightLo ? lo[pos]! : 0;
-    const last = tightHi ? hi[pos]! : 9;
+    const first: number = tightLo ? lo[pos]! : 0;
+    const last: number = tightHi ? hi[pos]! : 9;
     const goal = best(pos, tightLo, tightHi);
     const cost = (x: number): number => (x === d[pos] ? 0 : 1) + best(pos + 1, tightLo && x === first, tightHi && x === last);
     // Keep the serial's own digit when that stays optimal, else the smallest digit that does.
-    let chosen = d[pos]! >= first && d[pos]! <= last && cost(d[pos]!) === goal ? d[pos]! : -1;
+    let chosen: number = d[pos]! >= first && d[pos]! <= last && cost(d[pos]!) === goal ? d[pos]! : -1;
     for (let x = first; chosen < 0 && x <= last; x++) if (cost(x) === goal) chosen = x;
     target.push(chosen);
     tightLo = tightLo && chosen === first;
