@@ -29,10 +29,15 @@ export default defineConfig({
         },
       },
       {
-        resolve: { alias },
+        resolve: {
+          // The components run as they do in the web export: react-native-web and .web files first.
+          alias: { ...alias, 'react-native': 'react-native-web' },
+          extensions: ['.web.tsx', '.web.ts', '.web.js', '.tsx', '.ts', '.mjs', '.js', '.json'],
+        },
+        define: { __DEV__: 'true', 'process.env.EXPO_OS': '"web"' },
         test: {
           name: 'components',
-          include: ['test/components/**/*.test.tsx'],
+          include: ['test/components/**/*.test.{ts,tsx}'],
           environment: 'happy-dom',
           setupFiles: ['test/support/components-setup.ts'],
         },

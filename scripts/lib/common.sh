@@ -94,6 +94,7 @@ stop_postgres_if_started() {
 }
 
 psql_admin() {
+  PGOPTIONS="-c client_min_messages=warning" \
   "$PG_BIN/psql" -h 127.0.0.1 -p "$PGPORT" -U postgres -d postgres -v ON_ERROR_STOP=1 -qtA "$@"
 }
 
