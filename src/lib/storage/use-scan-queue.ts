@@ -1,0 +1,32 @@
+import { useEffect, useSyncExternalStore } from 'react';
+import { useSession } from '../session/session-provider';
+import { onNetworkReturn } from './network-events';
+import { ScanQueue, type QueueSnapshot } from './scan-queue';
+
+const queues = new Map<string, ScanQueue>();
+
+/** One queue per signed-in user on this device; it outlives screens, so leaving Sift never drops a note. */
+export function scanQueueFor(userId: string): ScanQueue {
+  let queue = queues.get(userId);
+  if (!queue) {
+    queue = new ScanQueue(`strapsift.queue.${userId}`);
+    queues.set(userId, queue);
+  }
+  return queue;
+}
+
+const idle: QueueSnapshot = { status: 'saved', waiting: 0, rejected: [], lastSyncedAt: null };
+const noop = () => () => undefined;
+
+export function useScanQueue(): { queue: ScanQueue | null; snapshot: QueueSnapshot } {
+  const { user } = useSession();
+  const queue = user ? scanQueueFor(user.id) : null;
+  const snapshot = useSyncExternalStore(queue?.subscribe ?? noop, queue?.getSnapshot ?? (() => idle), () => idle);
+  useEffect(() => {
+    if (!queue) return undefined;
+    // Notes logged while signed out or offline go up as soon as we can.
+    queue.retryNow();
+    return onNetworkReturn(() => queue.retryNow());
+  }, [queue]);
+  return { queue, snapshot };
+}
