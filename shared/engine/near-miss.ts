@@ -1,6 +1,7 @@
-import { isAllZero, nearMissBetween } from './_lib/near-miss-build';
-import { digitsOf, serialValue } from './_lib/serial-value';
-import { LADDERS } from './patterns';
+import { nibbleMask } from './_lib/bcd';
+import { digitTables } from './_lib/digit-tables';
+import { digitText } from './_lib/digit-text';
+import { serialValue } from './_lib/serial-value';
 import type { NearMiss, NearMissPatternId, SerialInput } from './types';
 
 /** Patterns with near misses, in the order readings list them. */
@@ -13,113 +14,270 @@ export const NEAR_MISS_PATTERN_IDS: readonly NearMissPatternId[] = [
   'ladder',
 ];
 
-function countDigits(d: readonly number[]): number[] {
-  const counts = [0, 0, 0, 0, 0, 0, 0, 0, 0, 0];
-  for (let i = 0; i < 8; i++) counts[d[i]!]++;
-  return counts;
+
+/**
+ * The near miss from serial digits to target digits (both leftmost first).
+ * Shared with watch patterns.
+ */
+export function nearMissBetween(serial: ArrayLike<number>, target: ArrayLike<number>): NearMiss {
+  let value = 0;
+  let distance = 0;
+  for (let i = 0; i < 8; i++) {
+    if (serial[i] !== target[i]) distance++;
+    value = value * 10 + target[i]!;
+  }
+  // Sized once: growing an empty array by push costs a second allocation.
+  const positions: number[] = distance === 0 ? [] : new Array<number>(distance);
+  for (let i = 0, k = 0; k < distance; i++) if (serial[i] !== target[i]) positions[k++] = i + 1;
+  return { distance, target: digitText(value), positions };
 }
 
-/** Digits ordered by count, most frequent first; ties go to the smaller digit. */
-function byFrequency(counts: readonly number[]): number[] {
-  return [0, 1, 2, 3, 4, 5, 6, 7, 8, 9].sort((a, b) => counts[b]! - counts[a]! || a - b);
+export function isAllZero(digits: ArrayLike<number>): boolean {
+  for (let i = 0; i < 8; i++) if (digits[i] !== 0) return false;
+  return true;
 }
 
-function solidMiss(d: readonly number[]): NearMiss {
-  const counts = countDigits(d);
+// The serial under study, packed once per call as BCD (d1 in the top nibble)
+// with its digit counts, so each of the six answers is a few XORs and masks.
+// Module state, not input: the caller's values are never touched.
+let bcdOf: Uint16Array | null = null;
+let reversedOf: Uint16Array = new Uint16Array(0);
+let countsLowOf: Uint32Array = new Uint32Array(0);
+let countsHighOf: Uint8Array = new Uint8Array(0);
+let digitMaskOf: Uint16Array = new Uint16Array(0);
+let popcountOf: Uint8Array = new Uint8Array(0);
+let textOf: string[] = [];
+/** positionsOf[m]: 1-based positions of the nibbles set in the 8-bit change mask m. */
+let positionsOf: number[][] = [];
+let distanceOf: Uint8Array = new Uint8Array(0);
+
+let serialBcd = 0;
+let serialHi = 0;
+let serialDigits = 0;
+let countsLow = 0;
+let countsHigh = 0;
+let distinctDigits = 0;
+
+function loadTables(): Uint16Array {
+  const t = digitTables();
+  reversedOf = t.reversed;
+  countsLowOf = t.countsLow;
+  countsHighOf = t.countsHigh;
+  digitMaskOf = t.digitMask;
+  popcountOf = t.popcount;
+  textOf = t.textByBcd;
+  positionsOf = [];
+  distanceOf = new Uint8Array(256);
+  for (let m = 0; m < 256; m++) {
+    const positions: number[] = [];
+    for (let nibble = 7; nibble >= 0; nibble--) if (m & (1 << nibble)) positions.push(8 - nibble);
+    positionsOf.push(positions);
+    distanceOf[m] = positions.length;
+  }
+  bcdOf = t.bcd;
+  return t.bcd;
+}
+
+function load(value: number): void {
+  const bcd = bcdOf ?? loadTables();
+  const v = value | 0;
+  const hi = (v / 10000) | 0;
+  const lo = v - hi * 10000;
+  serialHi = hi;
+  serialBcd = (bcd[hi]! << 16) | bcd[lo]!;
+  countsLow = countsLowOf[hi]! + countsLowOf[lo]!;
+  countsHigh = countsHighOf[hi]! + countsHighOf[lo]!;
+  serialDigits = digitMaskOf[hi]! | digitMaskOf[lo]!;
+  distinctDigits = popcountOf[serialDigits]!;
+  topsReady = false;
+}
+
+function countOf(digit: number): number {
+  return digit < 8 ? (countsLow >>> (4 * digit)) & 15 : (countsHigh >>> (4 * (digit - 8))) & 15;
+}
+
+function bcdText(bcd: number): string {
+  return textOf[bcd >>> 16]! + textOf[bcd & 0xffff]!;
+}
+
+function missTo(target: number): NearMiss {
+  const changed = nibbleMask(serialBcd ^ target);
+  return {
+    distance: distanceOf[changed]!,
+    target: bcdText(target),
+    positions: changed === 0 ? [] : positionsOf[changed]!.slice(),
+  };
+}
+
+function solidMiss(): NearMiss {
   // 0 is left out: 00000000 is not a serial, so the nearest solid of 00000001 is 7 changes away.
   let best = 1;
-  for (let digit = 2; digit <= 9; digit++) if (counts[digit]! > counts[best]!) best = digit;
-  return nearMissBetween(d, [best, best, best, best, best, best, best, best]);
-}
-
-/**
- * Exactly k distinct digits: keep the k most frequent digits and turn every
- * other digit into the most frequent one; when fewer than k digits occur,
- * introduce the missing ones from the right, taking positions of the most
- * frequent digit. The distance is max(8 − (top-k counts), k − distinct), the
- * proven minimum for "exactly k".
- */
-function exactlyKMiss(d: readonly number[], k: number): NearMiss {
-  const counts = countDigits(d);
-  const order = byFrequency(counts);
-  const distinct = counts.filter((c) => c > 0).length;
-  const keep = new Set(order.slice(0, Math.min(k, distinct)));
-  const top = order[0]!;
-  const target = d.map((digit) => (keep.has(digit) ? digit : top));
-  if (distinct < k) {
-    const fresh = [0, 1, 2, 3, 4, 5, 6, 7, 8, 9].filter((digit) => counts[digit] === 0);
-    let need = k - distinct;
-    for (let i = 7; i >= 0 && need > 0; i--) {
-      if (target[i] === top) {
-        target[i] = fresh[k - distinct - need]!;
-        need--;
-      }
+  let bestCount = countOf(1);
+  for (let digit = 2; digit <= 9; digit++) {
+    const c = countOf(digit);
+    if (c > bestCount) {
+      best = digit;
+      bestCount = c;
     }
   }
-  return nearMissBetween(d, target);
+  return missTo(Math.imul(best, 0x11111111));
+}
+
+// The three most frequent digits (ties to the smaller), found once per serial
+// and shared by the binary and trinary answers.
+let topsReady = false;
+let top0 = -1;
+let top1 = -1;
+let top2 = -1;
+
+function consider(digit: number, c: number, counts: number[]): void {
+  if (c === 0) return;
+  if (c > counts[0]!) {
+    top2 = top1;
+    counts[2] = counts[1]!;
+    top1 = top0;
+    counts[1] = counts[0]!;
+    top0 = digit;
+    counts[0] = c;
+  } else if (c > counts[1]!) {
+    top2 = top1;
+    counts[2] = counts[1]!;
+    top1 = digit;
+    counts[1] = c;
+  } else if (c > counts[2]!) {
+    top2 = digit;
+    counts[2] = c;
+  }
+}
+
+const topCounts = [0, 0, 0];
+
+function findTops(): void {
+  top0 = -1;
+  top1 = -1;
+  top2 = -1;
+  topCounts[0] = 0;
+  topCounts[1] = 0;
+  topCounts[2] = 0;
+  let low = countsLow;
+  for (let digit = 0; digit < 8; digit++) {
+    consider(digit, low & 15, topCounts);
+    low >>>= 4;
+  }
+  consider(8, countsHigh & 15, topCounts);
+  consider(9, (countsHigh >>> 4) & 15, topCounts);
+  topsReady = true;
 }
 
 /**
- * Mirror pairs (palindrome: i ↔ 7−i; repeater: i ↔ i+4). Each unequal pair
- * costs one change; the right digit copies the left unless that would make
- * 00000000, in which case one pair copies the other way (its right digit is
- * non-zero, so the target is a serial and the count stays minimal).
+ * Exactly k distinct digits: keep the k most frequent digits (ties to the
+ * smaller digit) and turn every other digit into the most frequent one; when
+ * fewer than k digits occur, introduce the smallest missing digits from the
+ * right, taking positions of the most frequent digit. The distance is
+ * max(8 − (top-k counts), k − distinct), the minimum for "exactly k".
  */
-function pairedMiss(d: readonly number[], partner: (i: number) => number): NearMiss {
-  const target = d.slice();
-  let firstUnequal = -1;
+function exactlyKMiss(k: number): NearMiss {
+  if (distinctDigits === k) return missTo(serialBcd);
+  if (!topsReady) findTops();
+  const t0 = top0;
+  const t1 = top1;
+  const t2 = top2;
+  let target = serialBcd;
+  if (distinctDigits > k) {
+    for (let nibble = 0; nibble < 8; nibble++) {
+      const shift = 4 * nibble;
+      const digit = (serialBcd >>> shift) & 15;
+      if (digit !== t0 && digit !== t1 && (k === 2 || digit !== t2)) target = (target & ~(15 << shift)) | (t0 << shift);
+    }
+  } else {
+    let fresh = 0;
+    let need = k - distinctDigits;
+    for (let nibble = 0; nibble < 8 && need > 0; nibble++) {
+      const shift = 4 * nibble;
+      if (((serialBcd >>> shift) & 15) !== t0) continue;
+      while (serialDigits & (1 << fresh)) fresh++;
+      target = (target & ~(15 << shift)) | (fresh << shift);
+      fresh++;
+      need--;
+    }
+  }
+  return missTo(target);
+}
+
+/**
+ * Each unequal pair of a palindrome (or repeater) costs one change; the right
+ * half copies the left unless that would make 00000000 (left half 0000). Then
+ * the leftmost unequal pair copies the other way: its right digit is non-zero,
+ * so the target is a serial and the count stays minimal.
+ */
+function radarMiss(): NearMiss {
+  const left = serialBcd >>> 16;
+  if (serialHi !== 0) return missTo((left << 16) | bcdOf![reversedOf[serialHi]!]!);
   for (let i = 0; i < 4; i++) {
-    const j = partner(i);
-    if (d[i] !== d[j]) {
-      if (firstUnequal < 0) firstUnequal = i;
-      target[j] = d[i]!;
-    }
+    const d = (serialBcd >>> (4 * i)) & 15;
+    if (d !== 0) return missTo((d << (4 * (7 - i))) | (d << (4 * i)));
   }
-  if (firstUnequal >= 0 && isAllZero(target)) {
-    const j = partner(firstUnequal);
-    target[j] = d[j]!;
-    target[firstUnequal] = d[j]!;
-  }
-  return nearMissBetween(d, target);
+  return missTo(serialBcd);
 }
 
-function ladderMiss(d: readonly number[]): NearMiss {
-  let best: NearMiss | null = null;
-  for (const ladder of LADDERS) {
-    const miss = nearMissBetween(d, digitsOf(ladder));
-    if (best === null || miss.distance < best.distance) best = miss;
+function repeaterMiss(): NearMiss {
+  const left = serialBcd >>> 16;
+  if (serialHi !== 0) return missTo((left << 16) | left);
+  for (let i = 0; i < 4; i++) {
+    const d = (serialBcd >>> (4 * (3 - i))) & 15;
+    if (d !== 0) return missTo((d << (4 * (7 - i))) | (d << (4 * (3 - i))));
   }
-  return best!;
+  return missTo(serialBcd);
+}
+
+const LADDER_BCD = [0x01234567, 0x12345678, 0x23456789, 0x76543210, 0x87654321 | 0, 0x98765432 | 0];
+
+function ladderMiss(): NearMiss {
+  let best = LADDER_BCD[0]!;
+  let bestDistance = 9;
+  for (const ladder of LADDER_BCD) {
+    const distance = distanceOf[nibbleMask(serialBcd ^ ladder)]!;
+    if (distance < bestDistance) {
+      bestDistance = distance;
+      best = ladder;
+    }
+  }
+  return missTo(best);
+}
+
+function missOf(pattern: NearMissPatternId): NearMiss {
+  switch (pattern) {
+    case 'binary':
+      return exactlyKMiss(2);
+    case 'trinary':
+      return exactlyKMiss(3);
+    case 'solid':
+      return solidMiss();
+    case 'radar':
+      return radarMiss();
+    case 'repeater':
+      return repeaterMiss();
+    case 'ladder':
+      return ladderMiss();
+  }
 }
 
 /** Near miss of one pattern for a value already known to be a serial. */
 export function nearMissOfValue(value: number, pattern: NearMissPatternId): NearMiss {
-  const d = digitsOf(value);
-  switch (pattern) {
-    case 'binary':
-      return exactlyKMiss(d, 2);
-    case 'trinary':
-      return exactlyKMiss(d, 3);
-    case 'solid':
-      return solidMiss(d);
-    case 'radar':
-      return pairedMiss(d, (i) => 7 - i);
-    case 'repeater':
-      return pairedMiss(d, (i) => i + 4);
-    case 'ladder':
-      return ladderMiss(d);
-  }
+  load(value);
+  return missOf(pattern);
 }
 
 /** All six near misses of a value already known to be a serial. */
 export function nearMissesOfValue(value: number): Record<NearMissPatternId, NearMiss> {
+  load(value);
   return {
-    binary: nearMissOfValue(value, 'binary'),
-    trinary: nearMissOfValue(value, 'trinary'),
-    solid: nearMissOfValue(value, 'solid'),
-    radar: nearMissOfValue(value, 'radar'),
-    repeater: nearMissOfValue(value, 'repeater'),
-    ladder: nearMissOfValue(value, 'ladder'),
+    binary: exactlyKMiss(2),
+    trinary: exactlyKMiss(3),
+    solid: solidMiss(),
+    radar: radarMiss(),
+    repeater: repeaterMiss(),
+    ladder: ladderMiss(),
   };
 }
 

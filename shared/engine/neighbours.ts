@@ -1,22 +1,85 @@
-import { NEIGHBOUR_PATTERNS, lowerBound, membersOf } from './_lib/members';
-import { serialValue, toDigits } from './_lib/serial-value';
-import type { NeighbourPatternId, Neighbours, SerialInput } from './types';
+import { NEIGHBOUR_PATTERNS, membersOf } from './_lib/members';
+import { digitText } from './_lib/digit-text';
+import { serialValue } from './_lib/serial-value';
+import type { Neighbour, NeighbourPatternId, Neighbours, SerialInput } from './types';
 
 /** Patterns that have neighbours (every pattern but `low` and `high`). */
 export const NEIGHBOUR_PATTERN_IDS: readonly NeighbourPatternId[] = NEIGHBOUR_PATTERNS;
 
-const NEIGHBOUR_SET: ReadonlySet<string> = new Set(NEIGHBOUR_PATTERNS);
+// Member lists held here by index once built, so a reading's eight look-ups
+// are array reads rather than map and cross-module calls. Each list also gets
+// a bucket index by the first four digits (starts[b] = first member ≥ b·10,000),
+// so a search touches a few cache lines instead of twenty scattered ones.
+interface Indexed {
+  list: Uint32Array;
+  starts: Uint32Array;
+  /** Member texts for the smaller lists (strings are immutable, so sharing them is safe). */
+  texts: string[] | null;
+}
+
+/** Lists up to this size keep their members' texts: about 32,000 strings in all, trinaries excluded. */
+const TEXT_CACHE_LIMIT = 20_000;
+
+let indexed: Indexed[] | null = null;
+
+function buildIndex(list: Uint32Array): Indexed {
+  const starts = new Uint32Array(10001);
+  let i = 0;
+  for (let b = 0; b <= 10000; b++) {
+    const floor = b * 10000;
+    while (i < list.length && list[i]! < floor) i++;
+    starts[b] = i;
+  }
+  const texts = list.length <= TEXT_CACHE_LIMIT ? Array.from(list, digitText) : null;
+  return { list, starts, texts };
+}
+
+function allIndexed(): Indexed[] {
+  indexed ??= NEIGHBOUR_PATTERNS.map((p) => buildIndex(membersOf(p)));
+  return indexed;
+}
+
+function around({ list, starts, texts }: Indexed, value: number): Neighbours {
+  const bucket = (value / 10000) | 0;
+  let lo = starts[bucket]!;
+  let hi = starts[bucket + 1]!;
+  while (lo < hi) {
+    const mid = (lo + hi) >>> 1;
+    if (list[mid]! < value) lo = mid + 1;
+    else hi = mid;
+  }
+  const above = lo < list.length && list[lo] === value ? lo + 1 : lo;
+  let below: Neighbour | null = null;
+  if (lo > 0) {
+    const member = list[lo - 1]!;
+    below = { serial: texts === null ? digitText(member) : texts[lo - 1]!, notesAway: value - member };
+  }
+  let after: Neighbour | null = null;
+  if (above < list.length) {
+    const member = list[above]!;
+    after = { serial: texts === null ? digitText(member) : texts[above]!, notesAway: member - value };
+  }
+  return { below, above: after };
+}
 
 /** Neighbours of a value already known to be a serial. */
 export function neighboursOfValue(value: number, pattern: NeighbourPatternId): Neighbours {
-  const list = membersOf(pattern);
-  const i = lowerBound(list, value);
-  const belowValue = i > 0 ? list[i - 1]! : -1;
-  const aboveIndex = i < list.length && list[i] === value ? i + 1 : i;
-  const aboveValue = aboveIndex < list.length ? list[aboveIndex]! : -1;
+  const index = NEIGHBOUR_PATTERNS.indexOf(pattern);
+  return around(allIndexed()[index]!, value);
+}
+
+/** Neighbours for all eight patterns, as a reading carries them. */
+export function allNeighboursOfValue(value: number): Record<NeighbourPatternId, Neighbours> {
+  const l = allIndexed();
   return {
-    below: belowValue < 0 ? null : { serial: toDigits(belowValue), notesAway: value - belowValue },
-    above: aboveValue < 0 ? null : { serial: toDigits(aboveValue), notesAway: aboveValue - value },
+    solid: around(l[0]!, value),
+    ladder: around(l[1]!, value),
+    radar: around(l[2]!, value),
+    repeater: around(l[3]!, value),
+    'super-repeater': around(l[4]!, value),
+    rotator: around(l[5]!, value),
+    binary: around(l[6]!, value),
+    trinary: around(l[7]!, value),
   };
 }
 
@@ -33,8 +96,9 @@ export function neighboursOfValue(value: number, pattern: NeighbourPatternId): N
  */
 export function neighbours(digits: SerialInput, pattern: NeighbourPatternId): Neighbours {
   const value = serialValue(digits, 'neighbours');
-  if (!NEIGHBOUR_SET.has(pattern)) {
+  const index = NEIGHBOUR_PATTERNS.indexOf(pattern);
+  if (index < 0) {
     throw new RangeError(`neighbours: no neighbours for pattern ${JSON.stringify(pattern)}; use one of ${NEIGHBOUR_PATTERNS.join(', ')}`);
   }
-  return neighboursOfValue(value, pattern);
+  return around(allIndexed()[index]!, value);
 }

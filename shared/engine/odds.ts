@@ -185,34 +185,57 @@ export function oddsTable(options: OddsOptions = {}): Array<PatternOdds & { id: 
   return PATTERN_ORDER.map((id) => ({ id, ...oddsOf(patternCount(id, { lowLimit: r.lowLimit, domainLast: r.last }), r.last) }));
 }
 
-const patternCountCache = new Map<string, number>();
-
-function cachedPatternCount(id: PatternId, r: Resolved): number {
-  const key = `${id}:${r.lowLimit}:${r.last}`;
-  let count = patternCountCache.get(key);
-  if (count === undefined) {
-    count = patternCount(id, { lowLimit: r.lowLimit, domainLast: r.last });
-    patternCountCache.set(key, count);
-  }
-  return count;
+/** Per-domain figures a reading needs, looked up once per (low limit, domain) and reused. */
+interface ReadingContext {
+  lowLimit: number;
+  last: number;
+  table: SignatureTable;
+  odds: Array<PatternOdds & { id: PatternId }>;
 }
 
-/** Odds of a serial's pattern mask, as a reading carries them. */
-export function readingOddsOfMask(mask: number, options: OddsOptions = {}): ReadingOdds {
-  const r = resolve(options, 'readingOdds');
+let lastContext: ReadingContext | null = null;
+const contexts = new Map<string, ReadingContext>();
+
+function contextFor(lowLimit: LowLimit, last: number): ReadingContext {
+  if (lastContext !== null && lastContext.lowLimit === lowLimit && lastContext.last === last) return lastContext;
+  const key = `${lowLimit}:${last}`;
+  let context = contexts.get(key);
+  if (!context) {
+    const r = resolve({ lowLimit, domainLast: last }, 'readingOdds');
+    context = {
+      lowLimit,
+      last,
+      table: tableFor(r),
+      odds: PATTERN_ORDER.map((id) => ({ id, ...oddsOf(patternCount(id, { lowLimit, domainLast: last }), last) })),
+    };
+    contexts.set(key, context);
+  }
+  lastContext = context;
+  return context;
+}
+
+/** Odds of a serial's pattern mask, as a reading carries them (options already validated). */
+export function readingOddsOfMask(mask: number, lowLimit: LowLimit = DEFAULT_LOW_LIMIT, domainLast: number = DOMAIN_LAST): ReadingOdds {
+  const context = contextFor(lowLimit, domainLast);
   const patterns: ReadingOdds['patterns'] = [];
+  if (mask === 0) return { domainSize: domainLast, patterns, combination: null };
   for (let i = 0; i < PATTERN_ORDER.length; i++) {
     if (mask & (1 << i)) {
-      const id = PATTERN_ORDER[i]!;
-      patterns.push({ id, ...oddsOf(cachedPatternCount(id, r), r.last) });
+      const o = context.odds[i]!;
+      patterns.push({ id: o.id, count: o.count, oneIn: o.oneIn, points: o.points });
     }
   }
-  if (mask === 0) return { domainSize: r.last, patterns, combination: null };
-  const table = tableFor(r);
+  const combined = oddsOf(atLeast(context.table, mask), domainLast);
   return {
-    domainSize: r.last,
+    domainSize: domainLast,
     patterns,
-    combination: { ids: maskToIds(mask), exactCount: table.exact.get(mask) ?? 0, ...oddsOf(atLeast(table, mask), r.last) },
+    combination: {
+      ids: maskToIds(mask),
+      exactCount: context.table.exact.get(mask) ?? 0,
+      count: combined.count,
+      oneIn: combined.oneIn,
+      points: combined.points,
+    },
   };
 }
 

@@ -45,6 +45,19 @@ export function parseSerial(input: unknown): ParseResult {
   if (input.length > MAX_SERIAL_TEXT) {
     return fail('too-long', `That is ${input.length} characters; a serial with its letters is about a dozen.`);
   }
+  if (input.length === 8) {
+    // The keypad sends exactly 8 digits; answer that without the general scanner.
+    let value = 0;
+    let i = 0;
+    for (; i < 8; i++) {
+      const c = input.charCodeAt(i);
+      if (c < 48 || c > 57) break;
+      value = value * 10 + (c - 48);
+    }
+    if (i === 8 && value !== 0) {
+      return { ok: true, digits: input, value, prefix: '', suffix: '', star: false, district: null, style: 'bare' };
+    }
+  }
   let prefix = '';
   let suffix = '';
   let digits = '';

@@ -1,4 +1,4 @@
-import { ALL_BITS, BIT, PATTERN_ORDER, maskToIds } from './_lib/pattern-bits';
+import { BIT, PATTERN_ORDER, maskToIds } from './_lib/pattern-bits';
 import { digitTables } from './_lib/digit-tables';
 import { serialValue } from './_lib/serial-value';
 import type { LowLimit, PatternId, SerialInput } from './types';
@@ -50,6 +50,35 @@ export function isLowLimit(value: unknown): value is LowLimit {
   return value === 9 || value === 99 || value === 999 || value === 9999 || value === 99999;
 }
 
+// Bit values repeated here as plain constants (not imported) because this is the
+// hottest function of the engine: under CommonJS interop every imported binding
+// is a getter call, which tripled its cost. The test suite checks they agree with
+// PATTERN_IDS order through classify.
+const SOLID = 1;
+const LADDER = 2;
+const RADAR = 4;
+const REPEATER = 8;
+const SUPER_REPEATER = 16;
+const ROTATOR = 32;
+const BINARY = 64;
+const TRINARY = 128;
+const LOW = 256;
+const HIGH = 512;
+
+let digitMaskOf: Uint16Array | null = null;
+let reversedOf: Uint16Array = new Uint16Array(0);
+let turnedOf: Int16Array = new Int16Array(0);
+let popcountOf: Uint8Array = new Uint8Array(0);
+
+function loadTables(): Uint16Array {
+  const t = digitTables();
+  reversedOf = t.reversed;
+  turnedOf = t.turned;
+  popcountOf = t.popcount;
+  digitMaskOf = t.digitMask;
+  return t.digitMask;
+}
+
 /**
  * The pattern bit mask of a serial value (1…99,999,999), without building any
  * string or array: the hot path under `classify`, `sweep` and the census.
@@ -59,14 +88,14 @@ export function isLowLimit(value: unknown): value is LowLimit {
  * patternMask(12121212, 999) // bits of repeater, super-repeater, binary
  */
 export function patternMask(value: number, lowLimit: number = DEFAULT_LOW_LIMIT): number {
-  const t = digitTables();
+  const dm = digitMaskOf ?? loadTables();
   const hi = (value / 10000) | 0;
   const lo = value - hi * 10000;
-  const distinct = t.popcount[t.digitMask[hi]! | t.digitMask[lo]!]!;
+  const distinct = popcountOf[dm[hi]! | dm[lo]!]!;
   let mask = 0;
-  if (distinct === 1) mask = BIT.solid;
-  else if (distinct === 2) mask = BIT.binary;
-  else if (distinct === 3) mask = BIT.trinary;
+  if (distinct === 1) mask = SOLID;
+  else if (distinct === 2) mask = BINARY;
+  else if (distinct === 3) mask = TRINARY;
   else if (distinct === 8) {
     if (
       value === 12345678 ||
@@ -76,18 +105,18 @@ export function patternMask(value: number, lowLimit: number = DEFAULT_LOW_LIMIT)
       value === 87654321 ||
       value === 76543210
     ) {
-      mask = BIT.ladder;
+      mask = LADDER;
     }
   }
-  if (t.reversed[hi] === lo) mask |= BIT.radar;
+  if (reversedOf[hi] === lo) mask |= RADAR;
   if (hi === lo) {
-    mask |= BIT.repeater;
-    if (hi % 101 === 0) mask |= BIT['super-repeater'];
+    mask |= REPEATER;
+    if (hi % 101 === 0) mask |= SUPER_REPEATER;
   }
-  if (t.turned[hi] === lo) mask |= BIT.rotator;
-  if (value <= lowLimit) mask |= BIT.low;
-  if (value >= HIGH_FROM) mask |= BIT.high;
-  return mask & ALL_BITS;
+  if (turnedOf[hi] === lo) mask |= ROTATOR;
+  if (value <= lowLimit) mask |= LOW;
+  if (value >= HIGH_FROM) mask |= HIGH;
+  return mask;
 }
 
 /**

@@ -3,12 +3,12 @@ import { DOMAIN_LAST } from './_lib/serial-value';
 import { tradeNotes } from '../trade/notes';
 import { featuresOfValue } from './features';
 import { nearMissesOfValue } from './near-miss';
-import { neighboursOfValue } from './neighbours';
+import { allNeighboursOfValue } from './neighbours';
 import { readingOddsOfMask } from './odds';
 import { parseSerial } from './parse';
 import { DEFAULT_LOW_LIMIT, isLowLimit, patternMask } from './patterns';
-import { DEFAULT_WEIGHTS, score } from './score';
-import type { LowLimit, NeighbourPatternId, Neighbours, ReadOptions, ReadResult, WatchPattern, WatchResult } from './types';
+import { DEFAULT_WEIGHTS, scoreAt } from './score';
+import type { LowLimit, ReadOptions, ReadResult, WatchPattern, WatchResult } from './types';
 import { parseWatchPattern, validWatchPattern, watchResultOfValue } from './watch';
 
 function watchList(items: ReadOptions['watch']): WatchPattern[] {
@@ -24,19 +24,6 @@ function watchList(items: ReadOptions['watch']): WatchPattern[] {
     }
   }
   return list;
-}
-
-function neighboursOf(value: number): Record<NeighbourPatternId, Neighbours> {
-  return {
-    solid: neighboursOfValue(value, 'solid'),
-    ladder: neighboursOfValue(value, 'ladder'),
-    radar: neighboursOfValue(value, 'radar'),
-    repeater: neighboursOfValue(value, 'repeater'),
-    'super-repeater': neighboursOfValue(value, 'super-repeater'),
-    rotator: neighboursOfValue(value, 'rotator'),
-    binary: neighboursOfValue(value, 'binary'),
-    trinary: neighboursOfValue(value, 'trinary'),
-  };
 }
 
 /**
@@ -72,7 +59,7 @@ export function read(input: string, options: ReadOptions = {}): ReadResult {
   const patterns = maskToIds(mask);
   const feats = featuresOfValue(value);
   const star = parsed.star || opts.star === true;
-  const watch: WatchResult[] = watchList(opts.watch).map((p) => watchResultOfValue(value, p));
+  const watch: WatchResult[] = opts.watch === undefined ? [] : watchList(opts.watch).map((p) => watchResultOfValue(value, p));
   const district = typeof opts.district === 'string' && opts.district !== '' ? opts.district.toUpperCase() : parsed.district;
   return {
     ok: true,
@@ -85,13 +72,18 @@ export function read(input: string, options: ReadOptions = {}): ReadResult {
     district,
     lowLimit,
     patterns,
-    ...feats,
+    distinctDigits: feats.distinctDigits,
+    longestRun: feats.longestRun,
+    maxDigitCount: feats.maxDigitCount,
+    lowTier: feats.lowTier,
+    run: feats.run,
+    count: feats.count,
     nearMiss: nearMissesOfValue(value),
-    neighbours: neighboursOf(value),
-    odds: readingOddsOfMask(mask, { lowLimit, domainLast }),
+    neighbours: allNeighboursOfValue(value),
+    odds: readingOddsOfMask(mask, lowLimit, domainLast),
     watch,
     // Score against the same low limit the reading used, so its lines match the badges.
-    score: score({ value, patterns, longestRun: feats.longestRun, maxDigitCount: feats.maxDigitCount, star, watch }, { ...weights, lowLimit }),
+    score: scoreAt({ value, patterns, longestRun: feats.longestRun, maxDigitCount: feats.maxDigitCount, star, watch }, weights, lowLimit),
     trade: tradeNotes({
       series: typeof opts.series === 'string' ? opts.series : undefined,
       district,

@@ -1,5 +1,5 @@
 import { DEFAULT_LOW_LIMIT, PATTERN_IDS, PATTERN_NAMES } from './patterns';
-import type { PatternId, Reading, Score, ScoreLine, WeightTable } from './types';
+import type { Reading, Score, ScoreLine, WeightTable } from './types';
 
 /**
  * Weights a new user starts with: roughly each pattern's rarity points
@@ -58,6 +58,18 @@ function signed(n: number): string {
   return n < 0 ? `−${text}` : `+${text}`;
 }
 
+// Most notes score the same few totals, so the last sentence is reused rather than rebuilt.
+let lastSuggestion = { points: Number.NaN, threshold: Number.NaN, text: '' };
+
+function suggestionFor(points: number, threshold: number, keep: boolean): string {
+  if (lastSuggestion.points === points && lastSuggestion.threshold === threshold) return lastSuggestion.text;
+  const text = keep
+    ? `${points} points, at or over the keep threshold of ${threshold}: keep it.`
+    : `${points} points, under the keep threshold of ${threshold}: back in the strap.`;
+  lastSuggestion = { points, threshold, text };
+  return text;
+}
+
 function line(kind: ScoreLine['kind'], label: string, points: number): ScoreLine {
   return { kind, label, points: round(points), text: `${label}  ${signed(points)}` };
 }
@@ -82,30 +94,35 @@ function line(kind: ScoreLine['kind'], label: string, points: number): ScoreLine
  * if (reading.ok) score(reading, DEFAULT_WEIGHTS).points // 17 (repeater 5 + super repeater 8 + binary 4)
  */
 export function score(reading: ScoreInput, weights: WeightTable): Score {
+  return scoreAt(reading, weights, finite(weights?.lowLimit) || DEFAULT_LOW_LIMIT);
+}
+
+/** `score` with the low limit given separately, so `read` can apply its own without copying the table. */
+export function scoreAt(reading: ScoreInput, weights: WeightTable, lowLimit: number): Score {
   const lines: ScoreLine[] = [];
-  const lowLimit = finite(weights.lowLimit) || DEFAULT_LOW_LIMIT;
-  const has = new Set<PatternId>(reading.patterns.filter((p) => p !== 'low'));
-  if (reading.value >= 1 && reading.value <= lowLimit) has.add('low');
+  const patternWeights = weights?.patterns;
+  const isLow = reading.value >= 1 && reading.value <= lowLimit;
   for (const id of PATTERN_IDS) {
-    if (has.has(id)) lines.push(line('pattern', PATTERN_NAMES[id], finite(weights.patterns?.[id])));
+    const has = id === 'low' ? isLow : reading.patterns.includes(id);
+    if (has) lines.push(line('pattern', PATTERN_NAMES[id], finite(patternWeights?.[id])));
   }
   if (reading.longestRun >= 3) {
-    const w = finite(weights.runs?.[reading.longestRun as 3]);
+    const w = finite(weights?.runs?.[reading.longestRun as 3]);
     if (w !== 0) lines.push(line('run', `run of ${reading.longestRun}`, w));
   }
   if (reading.maxDigitCount >= 4) {
-    const w = finite(weights.counts?.[reading.maxDigitCount as 4]);
+    const w = finite(weights?.counts?.[reading.maxDigitCount as 4]);
     if (w !== 0) lines.push(line('count', `one digit ${reading.maxDigitCount} times`, w));
   }
-  if (reading.star) lines.push(line('star', 'star note', finite(weights.starBonus)));
-  for (const w of reading.watch ?? []) {
-    if (w.matched) lines.push(line('watch', `watch ${w.text}`, finite(weights.watchBonus)));
+  if (reading.star) lines.push(line('star', 'star note', finite(weights?.starBonus)));
+  const watch = reading.watch;
+  if (watch) {
+    for (const w of watch) if (w.matched) lines.push(line('watch', `watch ${w.text}`, finite(weights?.watchBonus)));
   }
-  const points = round(lines.reduce((sum, l) => sum + l.points, 0));
-  const keepThreshold = finite(weights.keepThreshold);
+  let sum = 0;
+  for (const l of lines) sum += l.points;
+  const points = round(sum);
+  const keepThreshold = finite(weights?.keepThreshold);
   const keep = points >= keepThreshold;
-  const suggestion = keep
-    ? `${points} points, at or over the keep threshold of ${keepThreshold}: keep it.`
-    : `${points} points, under the keep threshold of ${keepThreshold}: back in the strap.`;
-  return { points, lines, keep, keepThreshold, suggestion };
+  return { points, lines, keep, keepThreshold, suggestion: suggestionFor(points, keepThreshold, keep) };
 }

@@ -1,4 +1,4 @@
-import { isAllZero, nearMissBetween } from './_lib/near-miss-build';
+import { isAllZero, nearMissBetween } from './near-miss';
 import { DOMAIN_LAST, digitsOf, serialValue } from './_lib/serial-value';
 import type {
   DateFormat,

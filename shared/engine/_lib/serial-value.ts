@@ -47,13 +47,8 @@ function describe(input: unknown): string {
   return String(input);
 }
 
-const PAD = ['', '0', '00', '000', '0000', '00000', '000000', '0000000'];
-
 /** 8-digit text of a value 0…99,999,999. */
-export function toDigits(value: number): string {
-  const s = String(value);
-  return s.length >= 8 ? s : PAD[8 - s.length] + s;
-}
+export { digitText as toDigits } from './digit-text';
 
 /** Digit at 0-based position i (0 = leftmost) of a value. */
 export function digitAt(value: number, i: number): number {
