@@ -3,9 +3,19 @@ import express, { type Express } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import type { DataSource } from 'typeorm';
+import { adminRoutes } from './features/admin/admin.routes';
 import { authRoutes } from './features/auth/auth.routes';
+import type { ResetMailer } from './features/auth/reset-mailer';
+import { crewRoutes } from './features/crew/crew.routes';
 import { healthRoutes } from './features/health/health.routes';
+import { huntsRoutes } from './features/hunts/hunts.routes';
+import { keepersRoutes } from './features/keepers/keepers.routes';
+import { scansRoutes } from './features/scans/scans.routes';
+import { strapsRoutes } from './features/straps/straps.routes';
+import { tallyRoutes } from './features/tally/tally.routes';
 import { usersRoutes } from './features/users/users.routes';
+import { watchRoutes } from './features/watch/watch.routes';
+import { weightsRoutes } from './features/weights/weights.routes';
 import { requireAuth } from './lib/auth-middleware';
 import { apiNotFound, errorHandler } from './lib/errors';
 import { logger } from './lib/logger';
@@ -16,10 +26,12 @@ export interface AppOptions {
   dataSource: DataSource;
   /** Folder of the Expo web export to serve beside the API; omitted in API-only tests. */
   webDist?: string;
+  /** Where password-reset messages go; tests pass an InMemoryResetOutbox to read the tokens. */
+  resetMailer?: ResetMailer;
 }
 
 /** Builds the Express app without listening, so tests can drive it in-process with supertest. */
-export function createApp({ dataSource, webDist }: AppOptions): Express {
+export function createApp({ dataSource, webDist, resetMailer }: AppOptions): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
@@ -41,11 +53,20 @@ export function createApp({ dataSource, webDist }: AppOptions): Express {
 
   const api = express.Router();
   api.use(express.json({ limit: '2mb' }));
-  const services = createServices(dataSource);
+  const services = createServices(dataSource, { resetMailer });
   const authed = requireAuth(dataSource);
   api.use(healthRoutes(dataSource));
-  api.use(authRoutes(services.auth));
+  api.use(authRoutes(services.auth, services.passwordReset));
   api.use(usersRoutes(services.users, authed));
+  api.use(huntsRoutes(services.hunts, authed));
+  api.use(crewRoutes(services.crew, authed));
+  api.use(strapsRoutes(services.straps, authed));
+  api.use(scansRoutes(services.scans, authed));
+  api.use(tallyRoutes(services.tally, authed));
+  api.use(keepersRoutes(services.keepers, authed));
+  api.use(weightsRoutes(services.weights, authed));
+  api.use(watchRoutes(services.watch, authed));
+  api.use(adminRoutes(services.admin, authed));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -44,7 +44,13 @@ export type AuthResponse = z.infer<typeof authResponse>;
 
 export const refreshRequest = z.object({ refreshToken: z.string().min(1, 'is required').max(2000) });
 export const forgotRequest = z.object({ email });
+export type ForgotRequest = z.infer<typeof forgotRequest>;
+/** 202 whether or not an account has that e-mail, so the answer tells nobody who has an account. */
+export const forgotResponse = z.object({ accepted: z.literal(true), message: z.string() });
+export type ForgotResponse = z.infer<typeof forgotResponse>;
+/** Answered with an AuthResponse: the new password signs the user in, and every older session ends. */
 export const resetRequest = z.object({ token: z.string().min(10, 'is not a valid reset token').max(200), password: newPassword });
+export type ResetRequest = z.infer<typeof resetRequest>;
 
 export const updateMeRequest = z
   .object({

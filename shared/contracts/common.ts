@@ -25,3 +25,35 @@ export const cursorQuery = z.object({
 });
 
 export const healthResponse = z.object({ ok: z.boolean(), db: z.enum(['up', 'down']), version: z.string() });
+
+/** Face values of the small notes hunters buy in straps, in whole dollars. */
+export const DENOMINATIONS = [1, 2, 5, 10, 20, 50, 100] as const;
+export const denomination = z
+  .number({ message: 'must be a face value in dollars' })
+  .int('must be a face value in dollars')
+  .refine((value) => (DENOMINATIONS as readonly number[]).includes(value), 'must be 1, 2, 5, 10, 20, 50 or 100');
+
+/** Ids of the engine's patterns, in the engine's canonical order (PATTERN_IDS). */
+export const PATTERN_ID_LIST = [
+  'solid',
+  'ladder',
+  'radar',
+  'repeater',
+  'super-repeater',
+  'rotator',
+  'binary',
+  'trinary',
+  'low',
+  'high',
+] as const;
+export const patternId = z.enum(PATTERN_ID_LIST);
+
+/** Whole numbers in a query string arrive as text. */
+export const queryInt = (min: number, max: number) =>
+  z.coerce.number({ message: 'must be a whole number' }).int('must be a whole number').min(min, `must be at least ${min}`).max(max, `must be at most ${max}`);
+
+/** 8 digits of a serial, leading zeros kept. */
+export const serialDigits = z.string().regex(/^\d{8}$/);
+
+/** A serial as a hunter types or pastes it; the engine decides whether it is one. */
+export const serialText = z.string().trim().min(1, 'is required').max(40, 'must be at most 40 characters');

@@ -1,0 +1,54 @@
+import type { DataSource, EntityManager } from 'typeorm';
+import { forbidden, notFound } from '../../lib/errors';
+import type { HuntStatus } from '../hunts/hunt.entity';
+import type { MemberRole } from './hunt-member.entity';
+
+export interface HuntRow {
+  id: string;
+  ownerId: string;
+  title: string;
+  source: string;
+  denomination: number;
+  plannedStraps: number;
+  status: HuntStatus;
+  startedAt: Date;
+  closedAt: Date | null;
+}
+
+export interface HuntAccess {
+  hunt: HuntRow;
+  role: MemberRole;
+}
+
+/**
+ * The hunt as the caller may see it. A hunt they are not a member of answers 404, exactly like one
+ * that does not exist, so ids of other people's hunts reveal nothing.
+ */
+export async function huntAccess(db: DataSource | EntityManager, huntId: string, userId: string): Promise<HuntAccess> {
+  const rows: Array<Record<string, unknown>> = await db.query(
+    `SELECT h.id, h.owner_id, h.title, h.source, h.denomination, h.planned_straps, h.status, h.started_at, h.closed_at, m.role
+       FROM hunts h JOIN hunt_members m ON m.hunt_id = h.id AND m.user_id = $2
+      WHERE h.id = $1`,
+    [huntId, userId],
+  );
+  const row = rows[0];
+  if (!row) throw notFound('No such hunt');
+  return {
+    role: row.role as MemberRole,
+    hunt: {
+      id: row.id as string,
+      ownerId: row.owner_id as string,
+      title: row.title as string,
+      source: row.source as string,
+      denomination: row.denomination as number,
+      plannedStraps: row.planned_straps as number,
+      status: row.status as HuntStatus,
+      startedAt: row.started_at as Date,
+      closedAt: (row.closed_at as Date | null) ?? null,
+    },
+  };
+}
+
+export function requireOwner(access: HuntAccess, what: string): void {
+  if (access.role !== 'owner') throw forbidden(`Only the hunt's owner may ${what}`);
+}

@@ -1,0 +1,51 @@
+import { Router, type RequestHandler } from 'express';
+import { idParams } from '../../../shared/contracts/common';
+import { createHuntRequest, huntListQuery, updateHuntRequest } from '../../../shared/contracts/hunts';
+import { route } from '../../lib/async-route';
+import { currentUser } from '../../lib/auth-middleware';
+import { parse } from '../../lib/validate';
+import type { HuntsService } from './hunts.service';
+
+export function huntsRoutes(hunts: HuntsService, requireAuth: RequestHandler): Router {
+  const router = Router();
+  router.use('/hunts', requireAuth);
+  router.get(
+    '/hunts',
+    route(async (req, res) => {
+      res.json(await hunts.list(currentUser(req).id, parse(huntListQuery, req.query)));
+    }),
+  );
+  router.post(
+    '/hunts',
+    route(async (req, res) => {
+      res.status(201).json(await hunts.create(currentUser(req).id, parse(createHuntRequest, req.body)));
+    }),
+  );
+  router.get(
+    '/hunts/:id',
+    route(async (req, res) => {
+      res.json(await hunts.get(currentUser(req).id, parse(idParams, req.params).id));
+    }),
+  );
+  router.patch(
+    '/hunts/:id',
+    route(async (req, res) => {
+      const { id } = parse(idParams, req.params);
+      res.json(await hunts.update(currentUser(req).id, id, parse(updateHuntRequest, req.body)));
+    }),
+  );
+  router.delete(
+    '/hunts/:id',
+    route(async (req, res) => {
+      await hunts.remove(currentUser(req).id, parse(idParams, req.params).id);
+      res.status(204).end();
+    }),
+  );
+  router.post(
+    '/hunts/:id/close',
+    route(async (req, res) => {
+      res.json(await hunts.close(currentUser(req).id, parse(idParams, req.params).id));
+    }),
+  );
+  return router;
+}

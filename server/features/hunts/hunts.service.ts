@@ -1,0 +1,183 @@
+import type { DataSource } from 'typeorm';
+import type { BestFind, CreateHuntRequest, HuntDetail, HuntList, HuntListQuery, HuntSummary, UpdateHuntRequest } from '../../../shared/contracts/hunts';
+import { decodeCursor, encodeCursor, timeIdCursor } from '../../lib/cursor';
+import { NON_LOW_MASK, idsOf, int, iso } from '../../lib/patterns';
+import { huntAccess, requireOwner } from '../crew/hunt-access';
+import { HuntMemberEntity, type MemberRole } from '../crew/hunt-member.entity';
+import type { WeightsService } from '../weights/weights.service';
+import { HuntEntity, type HuntStatus } from './hunt.entity';
+
+interface HuntListRow {
+  id: string;
+  title: string;
+  source: string;
+  denomination: number;
+  planned_straps: number;
+  status: HuntStatus;
+  started_at: Date;
+  closed_at: Date | null;
+  owner_id: string;
+  owner_name: string;
+  role: MemberRole;
+  member_count: number;
+}
+
+const HUNT_COLUMNS = `h.id, h.title, h.source, h.denomination, h.planned_straps, h.status, h.started_at, h.closed_at,
+  h.owner_id, u.display_name AS owner_name, m.role,
+  (SELECT count(*)::int FROM hunt_members mm WHERE mm.hunt_id = h.id) AS member_count`;
+
+export class HuntsService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly weights: WeightsService,
+  ) {}
+
+  async list(userId: string, query: HuntListQuery): Promise<HuntList> {
+    const after = decodeCursor(query.cursor, timeIdCursor);
+    const params: unknown[] = [userId];
+    const where = ['m.user_id = $1'];
+    if (query.status) {
+      params.push(query.status);
+      where.push(`h.status = $${params.length}`);
+    }
+    if (after) {
+      params.push(after[0], after[1]);
+      where.push(`(h.started_at, h.id) < ($${params.length - 1}::timestamptz, $${params.length}::uuid)`);
+    }
+    params.push(query.limit + 1);
+    const rows: HuntListRow[] = await this.dataSource.query(
+      `SELECT ${HUNT_COLUMNS}
+         FROM hunt_members m JOIN hunts h ON h.id = m.hunt_id JOIN users u ON u.id = h.owner_id
+        WHERE ${where.join(' AND ')}
+        ORDER BY h.started_at DESC, h.id DESC
+        LIMIT $${params.length}`,
+      params,
+    );
+    const pageRows = rows.slice(0, query.limit);
+    const last = pageRows[pageRows.length - 1];
+    return {
+      items: await this.summarise(userId, pageRows),
+      nextCursor: rows.length > query.limit && last ? encodeCursor([last.started_at.toISOString(), last.id]) : null,
+    };
+  }
+
+  async get(userId: string, huntId: string): Promise<HuntDetail> {
+    await huntAccess(this.dataSource, huntId, userId);
+    const rows: HuntListRow[] = await this.dataSource.query(
+      `SELECT ${HUNT_COLUMNS}
+         FROM hunt_members m JOIN hunts h ON h.id = m.hunt_id JOIN users u ON u.id = h.owner_id
+        WHERE m.user_id = $1 AND h.id = $2`,
+      [userId, huntId],
+    );
+    const [summary] = await this.summarise(userId, rows);
+    return summary!;
+  }
+
+  async create(userId: string, request: CreateHuntRequest): Promise<HuntDetail> {
+    const now = new Date();
+    const id = await this.dataSource.transaction(async (manager) => {
+      const hunt = await manager.getRepository(HuntEntity).save(
+        manager.getRepository(HuntEntity).create({
+          ownerId: userId,
+          title: request.title,
+          source: request.source,
+          denomination: request.denomination,
+          plannedStraps: request.plannedStraps,
+          status: 'open',
+          startedAt: request.startedAt ? new Date(request.startedAt) : now,
+          closedAt: null,
+        }),
+      );
+      await manager.getRepository(HuntMemberEntity).insert({ huntId: hunt.id, userId, role: 'owner', joinedAt: now });
+      return hunt.id;
+    });
+    return this.get(userId, id);
+  }
+
+  async update(userId: string, huntId: string, change: UpdateHuntRequest): Promise<HuntDetail> {
+    requireOwner(await huntAccess(this.dataSource, huntId, userId), 'change it');
+    const { startedAt, ...rest } = change;
+    await this.dataSource
+      .getRepository(HuntEntity)
+      .update({ id: huntId }, { ...rest, ...(startedAt ? { startedAt: new Date(startedAt) } : {}) });
+    return this.get(userId, huntId);
+  }
+
+  async remove(userId: string, huntId: string): Promise<void> {
+    requireOwner(await huntAccess(this.dataSource, huntId, userId), 'delete it');
+    await this.dataSource.getRepository(HuntEntity).delete({ id: huntId });
+  }
+
+  /** Closing twice keeps the first closing time: a retried request changes nothing. */
+  async close(userId: string, huntId: string): Promise<HuntDetail> {
+    const access = await huntAccess(this.dataSource, huntId, userId);
+    requireOwner(access, 'close it');
+    if (access.hunt.status !== 'closed') {
+      await this.dataSource.getRepository(HuntEntity).update({ id: huntId }, { status: 'closed', closedAt: new Date() });
+    }
+    return this.get(userId, huntId);
+  }
+
+  /** Figures for a page of hunts in three set-based queries, whatever the page size. */
+  private async summarise(userId: string, rows: HuntListRow[]): Promise<HuntSummary[]> {
+    if (rows.length === 0) return [];
+    const ids = rows.map((row) => row.id);
+    const { weights } = await this.weights.readingContext(userId);
+    const [stats, best] = await Promise.all([
+      this.dataSource.query(
+        `SELECT hunt_id,
+                count(*)::int AS notes,
+                count(*) FILTER (WHERE (pattern_mask & $2) <> 0 OR value <= $3)::int AS hits,
+                count(*) FILTER (WHERE keep)::int AS keeps,
+                count(*) FILTER (WHERE pulled)::int AS pulled,
+                count(DISTINCT strap)::int AS straps,
+                max(scanned_at) AS last_scan_at
+           FROM scans WHERE hunt_id = ANY($1::uuid[])
+          GROUP BY hunt_id`,
+        [ids, NON_LOW_MASK, weights.lowLimit],
+      ) as Promise<Array<Record<string, unknown>>>,
+      this.dataSource.query(
+        `SELECT DISTINCT ON (hunt_id) hunt_id, id, serial, digits, pattern_mask, points
+           FROM scans WHERE hunt_id = ANY($1::uuid[]) AND points > 0
+          ORDER BY hunt_id, points DESC, scanned_at ASC, id ASC`,
+        [ids],
+      ) as Promise<Array<Record<string, unknown>>>,
+    ]);
+    const statsBy = new Map(stats.map((row) => [row.hunt_id as string, row]));
+    const bestBy = new Map<string, BestFind>(
+      best.map((row) => [
+        row.hunt_id as string,
+        {
+          scanId: row.id as string,
+          serial: row.serial as string,
+          digits: row.digits as string,
+          patterns: idsOf(row.pattern_mask as number),
+          points: Number(row.points),
+        },
+      ]),
+    );
+    return rows.map((row) => {
+      const s = statsBy.get(row.id);
+      return {
+        id: row.id,
+        title: row.title,
+        source: row.source,
+        denomination: row.denomination,
+        plannedStraps: row.planned_straps,
+        status: row.status,
+        role: row.role,
+        owner: { id: row.owner_id, displayName: row.owner_name },
+        memberCount: row.member_count,
+        startedAt: row.started_at.toISOString(),
+        closedAt: iso(row.closed_at),
+        lastScanAt: iso(s?.last_scan_at as Date | undefined),
+        notesSearched: int(s?.notes),
+        hits: int(s?.hits),
+        keeps: int(s?.keeps),
+        pulled: int(s?.pulled),
+        strapCount: int(s?.straps),
+        bestFind: bestBy.get(row.id) ?? null,
+      };
+    });
+  }
+}

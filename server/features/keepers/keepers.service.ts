@@ -1,0 +1,257 @@
+import type { DataSource } from 'typeorm';
+import { read } from '../../../shared/engine';
+import type { Reading } from '../../../shared/engine';
+import type {
+  CreateKeeperRequest,
+  KeeperDetail,
+  KeeperList,
+  KeeperListQuery,
+  KeeperSort,
+  KeeperSummary,
+  UpdateKeeperRequest,
+} from '../../../shared/contracts/keepers';
+import { z } from 'zod';
+import { containsPattern } from '../../lib/like';
+import { decodeCursor, encodeCursor } from '../../lib/cursor';
+import { HttpError, notFound } from '../../lib/errors';
+import { idsOf, maskOf } from '../../lib/patterns';
+import type { ReadingContext, WeightsService } from '../weights/weights.service';
+import { KeeperEntity } from './keeper.entity';
+
+/** What a keeper's reading depends on besides the owner's weights and watch patterns. */
+type NoteFacts = Pick<KeeperEntity, 'serial' | 'star' | 'series' | 'district' | 'facility' | 'denomination'>;
+
+function readNote(facts: NoteFacts, context: ReadingContext): Reading | null {
+  const reading = read(facts.serial, {
+    weights: context.weights,
+    watch: context.watch,
+    star: facts.star,
+    series: facts.series ?? undefined,
+    district: facts.district ?? undefined,
+    facility: facts.facility ?? undefined,
+    denomination: facts.denomination ?? undefined,
+  });
+  return reading.ok ? reading : null;
+}
+
+function unreadable(message: string): HttpError {
+  return new HttpError(400, 'invalid', 'Some fields need attention', { serial: message });
+}
+
+function toSummary(keeper: KeeperEntity): KeeperSummary {
+  return {
+    id: keeper.id,
+    serial: keeper.serial,
+    digits: keeper.digits,
+    prefix: keeper.prefix,
+    suffix: keeper.suffix,
+    star: keeper.star,
+    series: keeper.series,
+    district: keeper.district,
+    facility: keeper.facility,
+    denomination: keeper.denomination,
+    grade: keeper.grade,
+    estimatedValueCents: keeper.estimatedValueCents,
+    status: keeper.status,
+    notes: keeper.notes,
+    patterns: idsOf(keeper.patternMask),
+    points: Number(keeper.points),
+    huntId: keeper.huntId,
+    scanId: keeper.scanId,
+    foundAt: keeper.foundAt.toISOString(),
+    createdAt: keeper.createdAt.toISOString(),
+    updatedAt: keeper.updatedAt.toISOString(),
+  };
+}
+
+/**
+ * Each sort as an SQL key with a tiebreak on id, so keyset pages never skip or repeat a keeper.
+ * Missing grades and values sort last, as -1.
+ */
+const SORTS: Record<KeeperSort, { key: string; dir: 'ASC' | 'DESC'; kind: 'time' | 'number' | 'text' }> = {
+  newest: { key: 'k.found_at', dir: 'DESC', kind: 'time' },
+  oldest: { key: 'k.found_at', dir: 'ASC', kind: 'time' },
+  points: { key: 'k.points', dir: 'DESC', kind: 'number' },
+  value: { key: 'COALESCE(k.estimated_value_cents, -1)', dir: 'DESC', kind: 'number' },
+  grade: { key: 'COALESCE(k.grade, -1)', dir: 'DESC', kind: 'number' },
+  serial: { key: 'k.digits', dir: 'ASC', kind: 'text' },
+};
+
+const keeperCursor = z.tuple([z.union([z.string().max(64), z.number()]), z.string().uuid()]);
+
+export class KeepersService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly weights: WeightsService,
+  ) {}
+
+  private keepers() {
+    return this.dataSource.getRepository(KeeperEntity);
+  }
+
+  private async owned(userId: string, id: string): Promise<KeeperEntity> {
+    const keeper = await this.keepers().findOne({ where: { id, userId } });
+    if (!keeper) throw notFound('No such keeper');
+    return keeper;
+  }
+
+  async list(userId: string, query: KeeperListQuery): Promise<KeeperList> {
+    const sort = SORTS[query.sort];
+    const after = decodeCursor(query.cursor, keeperCursor);
+    const params: unknown[] = [userId];
+    const where = ['k.user_id = $1'];
+    if (query.status) {
+      params.push(query.status);
+      where.push(`k.status = $${params.length}`);
+    }
+    if (query.query) {
+      params.push(containsPattern(query.query));
+      const p = `$${params.length}`;
+      const digitsOnly = query.query.replace(/[\s-]/g, '');
+      params.push(/^\d+$/.test(digitsOnly) ? containsPattern(digitsOnly) : null);
+      const d = `$${params.length}`;
+      where.push(
+        `(k.serial ILIKE ${p} OR k.notes ILIKE ${p} OR k.series ILIKE ${p} OR k.district ILIKE ${p} OR (${d}::text IS NOT NULL AND k.digits LIKE ${d}))`,
+      );
+    }
+    if (after) {
+      const cast = sort.kind === 'time' ? '::timestamptz' : sort.kind === 'number' ? '::float8' : '::text';
+      params.push(after[0], after[1]);
+      const op = sort.dir === 'DESC' ? '<' : '>';
+      where.push(`(${sort.key}, k.id) ${op} ($${params.length - 1}${cast}, $${params.length}::uuid)`);
+    }
+    params.push(query.limit + 1);
+    const rows: Array<{ id: string; sort_key: Date | number | string }> = await this.dataSource.query(
+      `SELECT k.id, ${sort.key} AS sort_key FROM keepers k
+        WHERE ${where.join(' AND ')}
+        ORDER BY ${sort.key} ${sort.dir}, k.id ${sort.dir}
+        LIMIT $${params.length}`,
+      params,
+    );
+    const pageRows = rows.slice(0, query.limit);
+    const entities = pageRows.length ? await this.keepers().findBy(pageRows.map((row) => ({ id: row.id, userId }))) : [];
+    const byId = new Map(entities.map((keeper) => [keeper.id, keeper]));
+    const last = pageRows[pageRows.length - 1];
+    const lastKey = last ? (last.sort_key instanceof Date ? last.sort_key.toISOString() : last.sort_key) : null;
+    return {
+      items: pageRows.map((row) => toSummary(byId.get(row.id)!)),
+      nextCursor: rows.length > query.limit && last && lastKey !== null ? encodeCursor([lastKey, last.id]) : null,
+    };
+  }
+
+  async get(userId: string, id: string): Promise<KeeperDetail> {
+    const keeper = await this.owned(userId, id);
+    const reading = readNote(keeper, await this.weights.readingContext(userId));
+    if (!reading) throw new Error(`keeper ${id} holds a serial the engine cannot read`);
+    return { ...toSummary(keeper), reading };
+  }
+
+  /**
+   * From a logged note or typed in. Keeping the same logged note twice returns the first keeper
+   * (200 instead of 201), so a retried request never makes two.
+   */
+  async create(userId: string, request: CreateKeeperRequest): Promise<{ keeper: KeeperDetail; created: boolean }> {
+    const context = await this.weights.readingContext(userId);
+    let base: { serial: string; star: boolean; district: string | null; denomination: number | null; huntId: string | null; foundAt: Date };
+    if (request.scanId) {
+      const rows: Array<Record<string, unknown>> = await this.dataSource.query(
+        `SELECT s.id, s.serial, s.star, s.district, s.hunt_id, s.scanned_at, h.denomination
+           FROM scans s JOIN hunts h ON h.id = s.hunt_id JOIN hunt_members m ON m.hunt_id = s.hunt_id AND m.user_id = $2
+          WHERE s.id = $1`,
+        [request.scanId, userId],
+      );
+      const scan = rows[0];
+      if (!scan) throw notFound('No such scan');
+      const existing = await this.keepers().findOne({ where: { userId, scanId: request.scanId } });
+      if (existing) return { keeper: await this.get(userId, existing.id), created: false };
+      base = {
+        serial: scan.serial as string,
+        star: scan.star as boolean,
+        district: (scan.district as string | null) ?? null,
+        denomination: scan.denomination as number,
+        huntId: scan.hunt_id as string,
+        foundAt: scan.scanned_at as Date,
+      };
+    } else {
+      base = { serial: request.serial!, star: false, district: null, denomination: null, huntId: null, foundAt: new Date() };
+    }
+
+    const facts: NoteFacts = {
+      serial: base.serial,
+      star: request.star ?? base.star,
+      series: request.series ?? null,
+      district: request.district !== undefined ? request.district : base.district,
+      facility: request.facility ?? null,
+      denomination: request.denomination !== undefined ? request.denomination : base.denomination,
+    };
+    const reading = read(facts.serial);
+    if (!reading.ok) throw unreadable(reading.error.message);
+    // A typed-in serial's prefix names its district unless the hunter said otherwise.
+    if (request.district === undefined && facts.district === null) facts.district = reading.district;
+    const scored = readNote(facts, context)!;
+    try {
+      const saved = await this.keepers().save(
+        this.keepers().create({
+          ...facts,
+          userId,
+          scanId: request.scanId ?? null,
+          huntId: base.huntId,
+          digits: scored.digits,
+          prefix: scored.prefix,
+          suffix: scored.suffix,
+          star: scored.star,
+          grade: request.grade ?? null,
+          estimatedValueCents: request.estimatedValueCents ?? null,
+          status: request.status ?? 'kept',
+          notes: request.notes || null,
+          patternMask: maskOf(scored.patterns),
+          points: scored.score.points,
+          foundAt: request.foundAt ? new Date(request.foundAt) : base.foundAt,
+        }),
+      );
+      return { keeper: { ...toSummary(saved), reading: scored }, created: true };
+    } catch (error) {
+      // Two "keep" taps racing for one note: the unique index lets one through, the other gets it back.
+      if ((error as { code?: string }).code === '23505' && request.scanId) {
+        const existing = await this.keepers().findOne({ where: { userId, scanId: request.scanId } });
+        if (existing) return { keeper: await this.get(userId, existing.id), created: false };
+      }
+      throw error;
+    }
+  }
+
+  async update(userId: string, id: string, change: UpdateKeeperRequest): Promise<KeeperDetail> {
+    const keeper = await this.owned(userId, id);
+    if (change.serial !== undefined) {
+      const reading = read(change.serial);
+      if (!reading.ok) throw unreadable(reading.error.message);
+      keeper.serial = change.serial;
+      if (change.district === undefined && reading.district) keeper.district = reading.district;
+    }
+    if (change.star !== undefined) keeper.star = change.star;
+    if (change.series !== undefined) keeper.series = change.series;
+    if (change.district !== undefined) keeper.district = change.district;
+    if (change.facility !== undefined) keeper.facility = change.facility;
+    if (change.denomination !== undefined) keeper.denomination = change.denomination;
+    if (change.grade !== undefined) keeper.grade = change.grade;
+    if (change.estimatedValueCents !== undefined) keeper.estimatedValueCents = change.estimatedValueCents;
+    if (change.status !== undefined) keeper.status = change.status;
+    if (change.notes !== undefined) keeper.notes = change.notes || null;
+    if (change.foundAt !== undefined) keeper.foundAt = new Date(change.foundAt);
+    const scored = readNote(keeper, await this.weights.readingContext(userId));
+    if (!scored) throw unreadable('is not a serial');
+    keeper.digits = scored.digits;
+    keeper.prefix = scored.prefix;
+    keeper.suffix = scored.suffix;
+    keeper.star = scored.star;
+    keeper.patternMask = maskOf(scored.patterns);
+    keeper.points = scored.score.points;
+    const saved = await this.keepers().save(keeper);
+    return { ...toSummary(saved), reading: scored };
+  }
+
+  async remove(userId: string, id: string): Promise<void> {
+    const result = await this.keepers().delete({ id, userId });
+    if (!result.affected) throw notFound('No such keeper');
+  }
+}

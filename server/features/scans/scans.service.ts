@@ -1,0 +1,235 @@
+import type { DataSource } from 'typeorm';
+import { read } from '../../../shared/engine';
+import type { Reading } from '../../../shared/engine';
+import { scanInput, type RejectedScan, type ScanBatchResponse, type ScanListQuery, type ScanPage } from '../../../shared/contracts/scans';
+import { HttpError, fieldsFromZod, forbidden, notFound } from '../../lib/errors';
+import { decodeCursor, encodeCursor, timeIdCursor } from '../../lib/cursor';
+import { idsOf, maskOf } from '../../lib/patterns';
+import { huntAccess } from '../crew/hunt-access';
+import type { HuntStatus } from '../hunts/hunt.entity';
+import type { ReadingContext, WeightsService } from '../weights/weights.service';
+
+interface VisibleHunt {
+  id: string;
+  status: HuntStatus;
+  closed_at: Date | null;
+  denomination: number;
+}
+
+/** One scan ready to insert: the device's facts plus the server's own reading. */
+interface Prepared {
+  id: string;
+  huntId: string;
+  strap: number;
+  serial: string;
+  pulled: boolean;
+  scannedAt: string;
+  reading: Reading;
+}
+
+/** Reads a serial as the server stores it; exported so tests can hold the stored row against the engine. */
+export function serverReading(serial: string, context: ReadingContext, facts: { star?: boolean; denomination?: number }): ReturnType<typeof read> {
+  return read(serial, { weights: context.weights, watch: context.watch, star: facts.star === true, denomination: facts.denomination });
+}
+
+function fieldSummary(fields: Record<string, string>): string {
+  return Object.entries(fields)
+    .map(([field, message]) => `${field} ${message}`)
+    .join('; ');
+}
+
+export class ScansService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly weights: WeightsService,
+  ) {}
+
+  /**
+   * Stores each new note exactly once. The device's id is the primary key and the insert is
+   * `ON CONFLICT DO NOTHING RETURNING id`, so a retried batch, or two copies racing each other, store a
+   * note once: the first writer stores it, everyone else is told it is a duplicate. Problems with one
+   * note reject that note alone.
+   */
+  async storeBatch(userId: string, scans: ReadonlyArray<{ id: string } & Record<string, unknown>>): Promise<ScanBatchResponse> {
+    const rejected: RejectedScan[] = [];
+    const duplicates: string[] = [];
+    const seen = new Set<string>();
+    const candidates: Array<{ id: string; input: ReturnType<typeof scanInput.parse> }> = [];
+    for (const raw of scans) {
+      if (seen.has(raw.id)) {
+        duplicates.push(raw.id);
+        continue;
+      }
+      seen.add(raw.id);
+      const parsed = scanInput.safeParse(raw);
+      if (!parsed.success) rejected.push({ id: raw.id, code: 'invalid', error: fieldSummary(fieldsFromZod(parsed.error)) });
+      else candidates.push({ id: raw.id, input: parsed.data });
+    }
+
+    const huntIds = [...new Set(candidates.map((c) => c.input.huntId))];
+    const [hunts, context] = await Promise.all([
+      huntIds.length
+        ? (this.dataSource.query(
+            `SELECT h.id, h.status, h.closed_at, h.denomination
+               FROM hunts h JOIN hunt_members m ON m.hunt_id = h.id AND m.user_id = $1
+              WHERE h.id = ANY($2::uuid[])`,
+            [userId, huntIds],
+          ) as Promise<VisibleHunt[]>)
+        : Promise.resolve([] as VisibleHunt[]),
+      this.weights.readingContext(userId),
+    ]);
+    const huntBy = new Map(hunts.map((hunt) => [hunt.id, hunt]));
+
+    const prepared: Prepared[] = [];
+    for (const { id, input } of candidates) {
+      const hunt = huntBy.get(input.huntId);
+      if (!hunt) {
+        rejected.push({ id, code: 'hunt-not-found', error: 'No such hunt, or you are not in its crew' });
+        continue;
+      }
+      // Notes logged before the close still count: a device that was offline may upload them late.
+      if (hunt.status === 'closed' && hunt.closed_at && new Date(input.scannedAt) > hunt.closed_at) {
+        rejected.push({ id, code: 'hunt-closed', error: 'The hunt was closed before this note was logged' });
+        continue;
+      }
+      const reading = serverReading(input.serial, context, { star: input.star, denomination: hunt.denomination });
+      if (!reading.ok) {
+        rejected.push({ id, code: 'unreadable-serial', error: reading.error.message });
+        continue;
+      }
+      prepared.push({
+        id,
+        huntId: input.huntId,
+        strap: input.strap,
+        serial: input.serial,
+        pulled: input.pulled === true,
+        scannedAt: new Date(input.scannedAt).toISOString(),
+        reading,
+      });
+    }
+
+    // A note already stored (or deleted after upload) is a duplicate even if it would be rejected now,
+    // e.g. because the hunt closed since: the device should drop it, not show an error.
+    const known = await this.knownIds([...prepared.map((p) => p.id), ...rejected.map((r) => r.id)]);
+    const stillRejected = rejected.filter((r) => !known.has(r.id));
+    for (const r of rejected) if (known.has(r.id)) duplicates.push(r.id);
+    const toInsert = prepared.filter((p) => {
+      if (!known.has(p.id)) return true;
+      duplicates.push(p.id);
+      return false;
+    });
+
+    const stored = toInsert.length ? await this.insert(userId, toInsert) : new Set<string>();
+    for (const p of toInsert) if (!stored.has(p.id)) duplicates.push(p.id);
+    return { stored: toInsert.filter((p) => stored.has(p.id)).map((p) => p.id), duplicates, rejected: stillRejected };
+  }
+
+  private async knownIds(ids: string[]): Promise<Set<string>> {
+    if (ids.length === 0) return new Set();
+    const rows: Array<{ id: string }> = await this.dataSource.query(
+      `SELECT id FROM scans WHERE id = ANY($1::uuid[]) UNION SELECT id FROM scan_tombstones WHERE id = ANY($1::uuid[])`,
+      [ids],
+    );
+    return new Set(rows.map((row) => row.id));
+  }
+
+  // One statement over parallel arrays: a fixed number of parameters whatever the batch size.
+  private async insert(userId: string, scans: Prepared[]): Promise<Set<string>> {
+    const rows: Array<{ id: string }> = await this.dataSource.query(
+      `INSERT INTO scans (id, hunt_id, user_id, strap, serial, digits, value, prefix, suffix, star, district, pulled, pattern_mask, points, keep, scanned_at)
+       SELECT t.id, t.hunt_id, $1::uuid, t.strap, t.serial, t.digits, t.value, t.prefix, t.suffix, t.star, t.district, t.pulled,
+              t.pattern_mask, t.points, t.keep, t.scanned_at
+         FROM unnest($2::uuid[], $3::uuid[], $4::int[], $5::varchar[], $6::varchar[], $7::int[], $8::varchar[], $9::varchar[],
+                     $10::bool[], $11::varchar[], $12::bool[], $13::int[], $14::float8[], $15::bool[], $16::timestamptz[])
+           AS t(id, hunt_id, strap, serial, digits, value, prefix, suffix, star, district, pulled, pattern_mask, points, keep, scanned_at)
+       ON CONFLICT (id) DO NOTHING
+       RETURNING id`,
+      [
+        userId,
+        scans.map((s) => s.id),
+        scans.map((s) => s.huntId),
+        scans.map((s) => s.strap),
+        scans.map((s) => s.serial),
+        scans.map((s) => s.reading.digits),
+        scans.map((s) => s.reading.value),
+        scans.map((s) => s.reading.prefix),
+        scans.map((s) => s.reading.suffix),
+        scans.map((s) => s.reading.star),
+        scans.map((s) => s.reading.district),
+        scans.map((s) => s.pulled),
+        scans.map((s) => maskOf(s.reading.patterns)),
+        scans.map((s) => s.reading.score.points),
+        scans.map((s) => s.reading.score.keep),
+        scans.map((s) => s.scannedAt),
+      ],
+    );
+    return new Set(rows.map((row) => row.id));
+  }
+
+  async list(userId: string, huntId: string, query: ScanListQuery): Promise<ScanPage> {
+    await huntAccess(this.dataSource, huntId, userId);
+    const after = decodeCursor(query.cursor, timeIdCursor);
+    const params: unknown[] = [huntId];
+    const where = ['s.hunt_id = $1'];
+    if (query.strap !== undefined) {
+      params.push(query.strap);
+      where.push(`s.strap = $${params.length}`);
+    }
+    if (after) {
+      params.push(after[0], after[1]);
+      where.push(`(s.scanned_at, s.id) < ($${params.length - 1}::timestamptz, $${params.length}::uuid)`);
+    }
+    params.push(query.limit + 1);
+    const rows: Array<Record<string, unknown>> = await this.dataSource.query(
+      `SELECT s.id, s.hunt_id, s.strap, s.serial, s.digits, s.prefix, s.suffix, s.star, s.district, s.pulled,
+              s.pattern_mask, s.points, s.keep, s.scanned_at, s.user_id, u.display_name
+         FROM scans s JOIN users u ON u.id = s.user_id
+        WHERE ${where.join(' AND ')}
+        ORDER BY s.scanned_at DESC, s.id DESC
+        LIMIT $${params.length}`,
+      params,
+    );
+    const pageRows = rows.slice(0, query.limit);
+    const last = pageRows[pageRows.length - 1];
+    return {
+      items: pageRows.map((row) => ({
+        id: row.id as string,
+        huntId: row.hunt_id as string,
+        strap: row.strap as number,
+        serial: row.serial as string,
+        digits: row.digits as string,
+        prefix: row.prefix as string,
+        suffix: row.suffix as string,
+        star: row.star as boolean,
+        district: (row.district as string | null) ?? null,
+        pulled: row.pulled as boolean,
+        patterns: idsOf(row.pattern_mask as number),
+        points: Number(row.points),
+        keep: row.keep as boolean,
+        scannedAt: (row.scanned_at as Date).toISOString(),
+        loggedBy: { id: row.user_id as string, displayName: row.display_name as string },
+      })),
+      nextCursor: rows.length > query.limit && last ? encodeCursor([(last.scanned_at as Date).toISOString(), last.id as string]) : null,
+    };
+  }
+
+  /**
+   * Takes a note back after upload (undo). The one who logged it or the hunt's owner may; the id is
+   * kept as a tombstone so an old queue re-sending it cannot bring it back.
+   */
+  async remove(userId: string, scanId: string): Promise<void> {
+    const rows: Array<{ hunt_id: string; user_id: string }> = await this.dataSource.query(`SELECT hunt_id, user_id FROM scans WHERE id = $1`, [scanId]);
+    const scan = rows[0];
+    if (!scan) throw notFound('No such scan');
+    const access = await huntAccess(this.dataSource, scan.hunt_id, userId).catch((error: unknown) => {
+      throw error instanceof HttpError && error.status === 404 ? notFound('No such scan') : error;
+    });
+    if (scan.user_id !== userId && access.role !== 'owner') {
+      throw forbidden('Only the one who logged this note or the hunt’s owner may delete it');
+    }
+    await this.dataSource.transaction(async (manager) => {
+      await manager.query(`INSERT INTO scan_tombstones (id, user_id) VALUES ($1, $2) ON CONFLICT DO NOTHING`, [scanId, scan.user_id]);
+      await manager.query(`DELETE FROM scans WHERE id = $1`, [scanId]);
+    });
+  }
+}

@@ -1,0 +1,135 @@
+import type { DataSource } from 'typeorm';
+import { expectedHits } from '../../../shared/engine';
+import type { LowLimit, PatternId } from '../../../shared/engine';
+import type { HuntTally, PeriodTally, TallyQuery } from '../../../shared/contracts/tally';
+import { HttpError } from '../../lib/errors';
+import { NON_LOW_MASK, PATTERN_BIT, PATTERN_IDS, PATTERN_NAMES, int } from '../../lib/patterns';
+import { huntAccess } from '../crew/hunt-access';
+import type { WeightsService } from '../weights/weights.service';
+
+type Figures = Omit<HuntTally, 'huntId'>;
+
+/**
+ * Every count a tally needs in one pass over the scans. `$lowParam` is the caller's low limit:
+ * `low` is judged again from the value so actual and expected use the same limit.
+ */
+function figureColumns(lowParam: string): string {
+  const perPattern = PATTERN_IDS.map((id) =>
+    id === 'low'
+      ? `count(*) FILTER (WHERE value <= ${lowParam})::int AS "low"`
+      : `count(*) FILTER (WHERE (pattern_mask & ${PATTERN_BIT[id]}) <> 0)::int AS "${id}"`,
+  );
+  return [
+    'count(*)::int AS notes',
+    `count(*) FILTER (WHERE (pattern_mask & ${NON_LOW_MASK}) <> 0 OR value <= ${lowParam})::int AS hits`,
+    'count(*) FILTER (WHERE keep)::int AS keeps',
+    'count(*) FILTER (WHERE pulled)::int AS pulled',
+    ...perPattern,
+  ].join(',\n');
+}
+
+const perThousand = (hits: number, notes: number): number => (notes > 0 ? (hits * 1000) / notes : 0);
+
+function figures(row: Record<string, unknown> | undefined, lowLimit: LowLimit): Figures {
+  const notes = int(row?.notes);
+  const actual = Object.fromEntries(PATTERN_IDS.map((id) => [id, int(row?.[id])])) as Record<PatternId, number>;
+  const expected = expectedHits(notes, actual, { lowLimit });
+  const hits = int(row?.hits);
+  return {
+    notes,
+    hits,
+    keeps: int(row?.keeps),
+    pulled: int(row?.pulled),
+    perThousand: perThousand(hits, notes),
+    lowLimit,
+    patterns: expected.rows.map((r) => ({
+      id: r.id,
+      name: PATTERN_NAMES[r.id],
+      hits: actual[r.id],
+      perThousand: perThousand(actual[r.id], notes),
+      probability: r.probability,
+      expected: r.expected,
+      pAtLeast: r.pAtLeast ?? 1,
+    })),
+    caveat: expected.caveat,
+  };
+}
+
+const DAY_MS = 24 * 60 * 60 * 1000;
+
+/** A bare date means its whole UTC day: from its first millisecond, to its last. */
+function bound(value: string | undefined, end: boolean): Date | null {
+  if (!value) return null;
+  if (/^\d{4}-\d{2}-\d{2}$/.test(value)) {
+    const start = new Date(`${value}T00:00:00.000Z`);
+    return end ? new Date(start.getTime() + DAY_MS - 1) : start;
+  }
+  return new Date(value);
+}
+
+export class TallyService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly weights: WeightsService,
+  ) {}
+
+  async hunt(userId: string, huntId: string): Promise<HuntTally> {
+    const [, weights] = await Promise.all([huntAccess(this.dataSource, huntId, userId), this.weights.activeWeights(userId)]);
+    const rows: Array<Record<string, unknown>> = await this.dataSource.query(
+      `SELECT ${figureColumns('$2')} FROM scans WHERE hunt_id = $1`,
+      [huntId, weights.lowLimit],
+    );
+    return { huntId, ...figures(rows[0], weights.lowLimit) };
+  }
+
+  /** Over every hunt the caller belongs to (crew's notes included), optionally within a period. */
+  async period(userId: string, query: TallyQuery): Promise<PeriodTally> {
+    const from = bound(query.from, false);
+    const to = bound(query.to, true);
+    if (from && to && from > to) throw new HttpError(400, 'invalid', 'Some fields need attention', { to: 'must not be before from' });
+    const weights = await this.weights.activeWeights(userId);
+    const scope = `s.hunt_id IN (SELECT hunt_id FROM hunt_members WHERE user_id = $1)
+       AND ($2::timestamptz IS NULL OR s.scanned_at >= $2) AND ($3::timestamptz IS NULL OR s.scanned_at <= $3)`;
+    const params = [userId, from?.toISOString() ?? null, to?.toISOString() ?? null, weights.lowLimit];
+    const [totals, byHunt, overTime] = await Promise.all([
+      this.dataSource.query(`SELECT ${figureColumns('$4')} FROM scans s WHERE ${scope}`, params) as Promise<Array<Record<string, unknown>>>,
+      this.dataSource.query(
+        `SELECT s.hunt_id, h.title, h.started_at, count(*)::int AS notes,
+                count(*) FILTER (WHERE (s.pattern_mask & ${NON_LOW_MASK}) <> 0 OR s.value <= $4)::int AS hits
+           FROM scans s JOIN hunts h ON h.id = s.hunt_id
+          WHERE ${scope}
+          GROUP BY s.hunt_id, h.title, h.started_at
+          ORDER BY h.started_at, s.hunt_id`,
+        params,
+      ) as Promise<Array<Record<string, unknown>>>,
+      this.dataSource.query(
+        `SELECT date_trunc($5, s.scanned_at AT TIME ZONE 'UTC') AT TIME ZONE 'UTC' AS start, count(*)::int AS notes,
+                count(*) FILTER (WHERE (s.pattern_mask & ${NON_LOW_MASK}) <> 0 OR s.value <= $4)::int AS hits
+           FROM scans s
+          WHERE ${scope}
+          GROUP BY 1 ORDER BY 1`,
+        [...params, query.bucket],
+      ) as Promise<Array<Record<string, unknown>>>,
+    ]);
+    return {
+      ...figures(totals[0], weights.lowLimit),
+      from: from?.toISOString() ?? null,
+      to: to?.toISOString() ?? null,
+      bucket: query.bucket,
+      byHunt: byHunt.map((row) => ({
+        huntId: row.hunt_id as string,
+        title: row.title as string,
+        startedAt: (row.started_at as Date).toISOString(),
+        notes: int(row.notes),
+        hits: int(row.hits),
+        perThousand: perThousand(int(row.hits), int(row.notes)),
+      })),
+      overTime: overTime.map((row) => ({
+        start: (row.start as Date).toISOString(),
+        notes: int(row.notes),
+        hits: int(row.hits),
+        perThousand: perThousand(int(row.hits), int(row.notes)),
+      })),
+    };
+  }
+}
