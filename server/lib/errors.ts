@@ -55,7 +55,7 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   }
   // Errors raised by express.json() and friends carry a client status: bad JSON, too large, wrong charset.
   if (typeof failure.status === 'number' && failure.status >= 400 && failure.status < 500) {
-    const code = failure.type === 'entity.too.large' ? 'too_large' : 'bad_request';
+    const code = failure.type === 'entity.too.large' ? 'too_large' : failure.status === 404 ? 'not_found' : 'bad_request';
     const message =
       failure.type === 'entity.parse.failed'
         ? 'The request body is not valid JSON'

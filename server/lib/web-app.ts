@@ -29,7 +29,8 @@ export function webAppRoutes(distDir: string): Router {
       return;
     }
     res.setHeader('Cache-Control', 'no-cache');
-    res.sendFile(indexHtml);
+    // dotfiles: the export may live under .data/ (screenshots, benches); the path is ours, not the caller's.
+    res.sendFile(indexHtml, { dotfiles: 'allow' });
   });
   return router;
 }

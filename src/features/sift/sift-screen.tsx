@@ -265,7 +265,7 @@ const styles = StyleSheet.create({
   headerTop: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between', gap: space.sm },
   entry: { gap: space.sm },
   quick: { flexDirection: 'row', alignItems: 'flex-end', gap: space.md },
-  prefixInput: { width: 88, minHeight: 40, textTransform: 'uppercase' },
+  prefixInput: { width: 88, minHeight: 40 },
   quickText: { flex: 1, paddingBottom: space.sm },
   phoneTop: { paddingHorizontal: space.md, paddingTop: space.sm, gap: space.sm },
   phoneReading: { flex: 1 },

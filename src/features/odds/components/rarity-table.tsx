@@ -1,0 +1,101 @@
+import { useMemo } from 'react';
+import { StyleSheet, View } from 'react-native';
+import { oddsOf, oddsTable, PATTERN_DEFINITIONS, PATTERN_NAMES, repeatCount, runCount, type LowLimit, type PatternId } from '@shared/engine';
+import { Text } from '@/components/ui/text';
+import { useTheme } from '@/theme/theme-provider';
+import { useLayout } from '@/theme/use-layout';
+import { fonts, space } from '@/theme/tokens';
+import { oneInText } from '../../sift/reading-view';
+
+interface Row {
+  key: string;
+  name: string;
+  definition: string;
+  count: number;
+  oneIn: number;
+  points: number;
+  weight: number | undefined;
+}
+
+const fmt = (n: number) => n.toLocaleString('en-US');
+
+/**
+ * Every pattern with its exact count over 00000001–99999999, "1 in N", rarity points log10(1/p),
+ * and the hunter's own weight beside it, so rarity and worth can be compared in one glance.
+ */
+export function RarityTable({ lowLimit, weightOf }: { lowLimit: LowLimit; weightOf(key: string): number | undefined }) {
+  const theme = useTheme();
+  const { isWide } = useLayout();
+  const rows = useMemo<Row[]>(() => {
+    const patterns = oddsTable({ lowLimit }).map((odds) => ({
+      key: odds.id,
+      name: PATTERN_NAMES[odds.id as PatternId],
+      definition: odds.id === 'low' ? `serial ≤ ${fmt(lowLimit)} (your low limit)` : PATTERN_DEFINITIONS[odds.id as PatternId],
+      count: odds.count,
+      oneIn: odds.oneIn,
+      points: odds.points,
+      weight: weightOf(odds.id),
+    }));
+    const runs = [4, 5, 6, 7].map((length) => {
+      const odds = oddsOf(runCount(length));
+      return { key: `run-${length}`, name: `run of ${length}+`, definition: `${length} or more of one digit in a row`, ...odds, weight: weightOf(`runs.${length}`) };
+    });
+    const counts = [5, 6, 7].map((times) => {
+      const odds = oddsOf(repeatCount(times));
+      return { key: `count-${times}`, name: `${times}+ of a digit`, definition: `one digit ${times} or more times anywhere`, ...odds, weight: weightOf(`counts.${times}`) };
+    });
+    return [...patterns, ...runs, ...counts].sort((a, b) => a.count - b.count);
+  }, [lowLimit, weightOf]);
+
+  return (
+    <View role="table" accessibilityLabel="Rarity of every pattern" testID="rarity-table">
+      <View style={[styles.row, styles.head, { borderBottomColor: theme.line }]} role="row">
+        <Text variant="label" tone="muted" style={styles.name}>
+          Pattern
+        </Text>
+        <Text variant="label" tone="muted" style={styles.num}>
+          Serials
+        </Text>
+        {isWide ? (
+          <Text variant="label" tone="muted" style={styles.num}>
+            1 in
+          </Text>
+        ) : null}
+        <Text variant="label" tone="muted" style={styles.small}>
+          Rarity
+        </Text>
+        <Text variant="label" tone="muted" style={styles.small}>
+          Weight
+        </Text>
+      </View>
+      {rows.map((row) => (
+        <View key={row.key} style={[styles.row, { borderBottomColor: theme.line }]} role="row">
+          <View style={styles.name}>
+            <Text bold>{row.name}</Text>
+            <Text variant="caption" tone="muted">
+              {row.definition}
+              {isWide ? '' : ` · ${oneInText(row.oneIn)}`}
+            </Text>
+          </View>
+          <Text style={[styles.num, styles.mono]}>{fmt(row.count)}</Text>
+          {isWide ? <Text style={[styles.num, styles.mono]}>{oneInText(row.oneIn).replace('1 in ', '')}</Text> : null}
+          <Text style={[styles.small, styles.mono]}>{row.points.toFixed(2)}</Text>
+          <Text style={[styles.small, styles.mono, { color: row.weight ? theme.hit : theme.inkFaint }]}>{row.weight ?? '–'}</Text>
+        </View>
+      ))}
+      <Text variant="caption" tone="faint" style={styles.foot}>
+        Counts are exact over the 99,999,999 serials 00000001–99999999 (worked out by counting, not sampling). Rarity is log10 of 1 in N: each point is ten times rarer.
+      </Text>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  row: { flexDirection: 'row', alignItems: 'center', gap: space.sm, paddingVertical: space.sm, borderBottomWidth: StyleSheet.hairlineWidth },
+  head: { paddingBottom: space.xs },
+  name: { flex: 1, gap: 2 },
+  num: { width: 104, textAlign: 'right' },
+  small: { width: 56, textAlign: 'right' },
+  mono: { fontFamily: fonts.mono, fontVariant: ['tabular-nums'], fontSize: 14 },
+  foot: { paddingTop: space.sm },
+});

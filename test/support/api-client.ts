@@ -1,0 +1,20 @@
+import { baseUrl } from './browser';
+
+/** Signs in through the real API of the served app and returns a small authorised fetch helper. */
+export async function apiAs(email: string, password: string) {
+  const login = await fetch(`${baseUrl()}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify({ email, password }),
+  });
+  if (!login.ok) throw new Error(`sign-in failed: ${login.status}`);
+  const { token } = (await login.json()) as { token: string };
+  return async function call<T = unknown>(path: string, init: RequestInit = {}): Promise<{ status: number; body: T }> {
+    const response = await fetch(`${baseUrl()}/api${path}`, {
+      ...init,
+      headers: { 'Content-Type': 'application/json', Authorization: `Bearer ${token}`, ...(init.headers ?? {}) },
+    });
+    const text = await response.text();
+    return { status: response.status, body: (text ? JSON.parse(text) : null) as T };
+  };
+}
