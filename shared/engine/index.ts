@@ -71,8 +71,8 @@ export {
   oddsTable,
   runCount,
   repeatCount,
-  warmTables,
 } from './odds';
+export { warmTables } from './tables';
 export type { OddsOptions } from './odds';
 export { score, DEFAULT_WEIGHTS, SCORE_EXPLANATION } from './score';
 export type { ScoreInput } from './score';

@@ -34,6 +34,13 @@ function buildIndex(list: Uint32Array): Indexed {
   return { list, starts, texts };
 }
 
+/** Builds every list with its index and texts; returns the bytes they hold. */
+export function warmNeighbourTables(): number {
+  let bytes = 0;
+  for (const { list, starts, texts } of allIndexed()) bytes += list.byteLength + starts.byteLength + (texts ? texts.length * 32 : 0);
+  return bytes;
+}
+
 function allIndexed(): Indexed[] {
   indexed ??= NEIGHBOUR_PATTERNS.map((p) => buildIndex(membersOf(p)));
   return indexed;

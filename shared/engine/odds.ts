@@ -1,5 +1,5 @@
 import { exactlyDistinctStrings, repeatAtLeastStrings, runAtLeastStrings } from './_lib/combinatorics';
-import { NEIGHBOUR_PATTERNS, lowerBound, membersOf } from './_lib/members';
+import { lowerBound, membersOf } from './_lib/members';
 import { PATTERN_ORDER, idsToMask, isPatternId, maskToIds } from './_lib/pattern-bits';
 import { DOMAIN_LAST } from './_lib/serial-value';
 import { DEFAULT_LOW_LIMIT, HIGH_FROM, isLowLimit, patternMask } from './patterns';
@@ -82,7 +82,7 @@ function memberValues(id: PatternId, r: Resolved): ArrayLike<number> & Iterable<
  * domain has no pattern at all.
  */
 function buildTable(r: Resolved): SignatureTable {
-  const exact = new Map<number, number>();
+  const tally = new Float64Array(1024);
   let withPatterns = 0;
   for (let i = 0; i < PATTERN_ORDER.length; i++) {
     const earlier = (1 << i) - 1;
@@ -92,11 +92,13 @@ function buildTable(r: Resolved): SignatureTable {
       if (v > r.last) break;
       const mask = patternMask(v, r.lowLimit);
       if ((mask & earlier) !== 0) continue;
-      exact.set(mask, (exact.get(mask) ?? 0) + 1);
+      tally[mask]++;
       withPatterns++;
     }
   }
-  exact.set(0, r.last - withPatterns);
+  tally[0] = r.last - withPatterns;
+  const exact = new Map<number, number>();
+  for (let mask = 0; mask < 1024; mask++) if (tally[mask]! > 0) exact.set(mask, tally[mask]!);
   return { domainSize: r.last, exact, atLeast: new Map() };
 }
 
@@ -263,10 +265,9 @@ export function repeatCount(times: number): number {
   return repeatAtLeastStrings(8, times) - 1;
 }
 
-/** Builds the member lists and the default combination table now rather than on the first reading. */
-export function warmTables(options: OddsOptions = {}): { memberBytes: number; combinations: number } {
-  let memberBytes = 0;
-  for (const pattern of NEIGHBOUR_PATTERNS) memberBytes += membersOf(pattern).byteLength;
-  const table = tableFor(resolve(options, 'warmTables'));
-  return { memberBytes, combinations: table.exact.size };
+/** Builds the default combination table now (see `warmTables`). */
+export function warmOddsTables(options: OddsOptions = {}): number {
+  const r = resolve(options, 'warmTables');
+  contextFor(r.lowLimit, r.last);
+  return tableFor(r).exact.size;
 }

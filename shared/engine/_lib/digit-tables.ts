@@ -28,6 +28,11 @@ const TURN = [0, 1, -1, -1, -1, -1, 9, -1, 8, 6] as const;
 
 let tables: DigitTables | null = null;
 
+/** One in digit d's nibble of the low counts word (digits 0–7), else 0; a power of two, not a shift, above bit 30. */
+function nibbleCount(digit: number): number {
+  return digit < 8 ? 2 ** (4 * digit) : 0;
+}
+
 function build(): DigitTables {
   const digitMask = new Uint16Array(10000);
   const reversed = new Uint16Array(10000);
@@ -49,15 +54,10 @@ function build(): DigitTables {
     const td = TURN[d];
     turned[h] = ta < 0 || tb < 0 || tc < 0 || td < 0 ? -1 : td * 1000 + tc * 100 + tb * 10 + ta;
     bcd[h] = (a << 12) | (b << 8) | (c << 4) | d;
-    let low = 0;
-    let high = 0;
-    for (const digit of [a, b, c, d]) {
-      if (digit < 8) low += 2 ** (4 * digit);
-      else high += 1 << (4 * (digit - 8));
-    }
-    countsLow[h] = low;
-    countsHigh[h] = high;
-    textByBcd[bcd[h]!] = String(h).padStart(4, '0');
+    countsLow[h] = nibbleCount(a) + nibbleCount(b) + nibbleCount(c) + nibbleCount(d);
+    countsHigh[h] = (a >= 8 ? 1 << (4 * (a - 8)) : 0) + (b >= 8 ? 1 << (4 * (b - 8)) : 0) +
+      (c >= 8 ? 1 << (4 * (c - 8)) : 0) + (d >= 8 ? 1 << (4 * (d - 8)) : 0);
+    textByBcd[bcd[h]!] = `${a}${b}${c}${d}`;
   }
   const popcount = new Uint8Array(1024);
   for (let m = 1; m < 1024; m++) popcount[m] = popcount[m >> 1]! + (m & 1);

@@ -9,34 +9,45 @@ import { digitTables } from './digit-tables';
  */
 const cache = new Map<NeighbourPatternId, Uint32Array>();
 
-/** Members with exactly `k` distinct digits, ascending, by depth-first generation in digit order. */
+/**
+ * Members with exactly `k` distinct digits, ascending. A serial hi·10⁴ + lo
+ * qualifies when the digit sets of its halves together hold k digits, so for
+ * each digit set of a first half the matching second halves are listed once
+ * (ascending), and the first halves are walked in order: the output comes out
+ * sorted with no sort and no per-serial test.
+ */
 function exactlyDistinct(k: number): Uint32Array {
-  let out = new Uint32Array(1024);
+  const t = digitTables();
+  const { popcount, digitMask } = t;
+  const secondHalves = new Array<Uint16Array | undefined>(1024);
+  const scratch = new Uint16Array(10000);
+  const matching = (firstMask: number): Uint16Array => {
+    let list = secondHalves[firstMask];
+    if (!list) {
+      let n = 0;
+      for (let lo = 0; lo < 10000; lo++) if (popcount[firstMask | digitMask[lo]!] === k) scratch[n++] = lo;
+      list = scratch.slice(0, n);
+      secondHalves[firstMask] = list;
+    }
+    return list;
+  };
+  // Sized exactly before filling: fresh memory is slow to touch, so no growing or trimming copies.
   let size = 0;
-  const push = (value: number): void => {
-    if (size === out.length) {
-      const grown = new Uint32Array(out.length * 2);
-      grown.set(out);
-      out = grown;
-    }
-    out[size++] = value;
-  };
-  const visit = (pos: number, value: number, mask: number, distinct: number): void => {
-    if (pos === 8) {
-      if (distinct === k && value !== 0) push(value);
-      return;
-    }
-    const remainingAfter = 7 - pos;
-    for (let d = 0; d < 10; d++) {
-      const isNew = (mask & (1 << d)) === 0;
-      const next = isNew ? distinct + 1 : distinct;
-      // Prune prefixes that already use too many digits or can no longer reach k.
-      if (next > k || next + remainingAfter < k) continue;
-      visit(pos + 1, value * 10 + d, mask | (1 << d), next);
-    }
-  };
-  visit(0, 0, 0, 0);
-  return out.slice(0, size);
+  for (let hi = 0; hi < 10000; hi++) {
+    const mask = digitMask[hi]!;
+    if (popcount[mask]! <= k) size += matching(mask).length;
+  }
+  const out = new Uint32Array(size);
+  let at = 0;
+  for (let hi = 0; hi < 10000; hi++) {
+    const mask = digitMask[hi]!;
+    if (popcount[mask]! > k) continue;
+    const los = secondHalves[mask]!;
+    const base = hi * 10000;
+    for (let i = 0; i < los.length; i++) out[at++] = base + los[i]!;
+  }
+  // k ≥ 2 never yields 00000000 (one distinct digit), so nothing needs removing.
+  return out;
 }
 
 function fromHalves(second: (hi: number) => number): Uint32Array {
