@@ -37,6 +37,8 @@ export function createServices(dataSource: DataSource, options: ServiceOptions =
 
   // Every new account starts with the engine's default weight table, active.
   auth.onRegister((user) => weights.ensureDefault(user.id));
+  // Shared hunts outlive their owner's account, so the crew's notes are not deleted with it.
+  users.onBeforeDelete((userId) => crew.handOverHunts(userId));
 
   return { auth, users, weights, passwordReset, resetMailer, hunts, crew, straps, scans, tally, keepers, watch, admin };
 }

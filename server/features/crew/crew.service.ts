@@ -58,4 +58,28 @@ export class CrewService {
     if (member.role === 'owner') throw forbidden('The owner cannot leave their own hunt; delete the hunt instead');
     await members.delete({ huntId, userId: memberId });
   }
+
+  /**
+   * Before an owner's account is deleted, each hunt they share goes to its longest-standing crew
+   * member, so the crew's notes (their rows, not the owner's) survive. Hunts without crew go with
+   * the account.
+   */
+  async handOverHunts(userId: string): Promise<void> {
+    await this.dataSource.transaction(async (manager) => {
+      const hunts: Array<{ id: string; heir: string | null }> = await manager.query(
+        `SELECT h.id,
+                (SELECT m.user_id FROM hunt_members m WHERE m.hunt_id = h.id AND m.user_id <> $1
+                  ORDER BY m.joined_at, m.user_id LIMIT 1) AS heir
+           FROM hunts h WHERE h.owner_id = $1
+          FOR UPDATE`,
+        [userId],
+      );
+      for (const hunt of hunts) {
+        if (!hunt.heir) continue;
+        await manager.query(`UPDATE hunts SET owner_id = $2, updated_at = now() WHERE id = $1`, [hunt.id, hunt.heir]);
+        await manager.query(`UPDATE hunt_members SET role = 'owner' WHERE hunt_id = $1 AND user_id = $2`, [hunt.id, hunt.heir]);
+        await manager.query(`UPDATE hunt_members SET role = 'crew' WHERE hunt_id = $1 AND user_id = $2`, [hunt.id, userId]);
+      }
+    });
+  }
 }
