@@ -45,7 +45,13 @@ export const HIGH_FROM = 99_990_000;
 /** The six ladders, ascending. */
 export const LADDERS: readonly number[] = [1234567, 12345678, 23456789, 76543210, 87654321, 98765432];
 
-/** True when `value` is one of the allowed low limits. */
+/**
+ * True when `value` is one of the allowed low limits.
+ *
+ * @example
+ * isLowLimit(9999) // true
+ * isLowLimit(500) // false
+ */
 export function isLowLimit(value: unknown): value is LowLimit {
   return value === 9 || value === 99 || value === 999 || value === 9999 || value === 99999;
 }

@@ -13,7 +13,7 @@ import { featuresOfValue } from './features';
  * Returns rough sizes, for the bench.
  *
  * @example
- * warmTables() // { neighbourBytes: 3262000, combinations: 31 }
+ * warmTables().combinations // 31: the combinations of patterns that occur with the default low limit
  */
 export function warmTables(options: OddsOptions = {}): { neighbourBytes: number; combinations: number } {
   const neighbourBytes = warmNeighbourTables();

@@ -44,3 +44,27 @@ describe('engine and trade sources', () => {
     expect(names.filter((n) => !/^[a-z0-9]+(-[a-z0-9]+)*\.ts$/.test(n))).toEqual([]);
   });
 });
+
+describe('public API documentation', () => {
+  it('when every function exported from the engine and trade entries is looked up, then its TSDoc carries an @example', () => {
+    const engineFiles = sources(join(root, 'shared/engine')).concat(sources(join(root, 'shared/trade')));
+    const texts = engineFiles.map((f) => readFileSync(f, 'utf8'));
+    const exported = [
+      ...readFileSync(join(root, 'shared/engine/index.ts'), 'utf8').matchAll(/^export \{([^}]+)\}/gm),
+      ...readFileSync(join(root, 'shared/trade/index.ts'), 'utf8').matchAll(/^export \{([^}]+)\}/gm),
+    ]
+      .flatMap((m) => m[1]!.split(','))
+      .map((name) => name.trim())
+      .filter((name) => /^[a-z]/.test(name));
+    const undocumented = exported.filter((name) => {
+      const text = texts.find((t) => new RegExp(`export function ${name}\\b`).test(t));
+      if (!text) return true;
+      const at = text.search(new RegExp(`export function ${name}\\b`));
+      const before = text.slice(0, at);
+      const doc = before.split('/**').at(-1) ?? '';
+      return !/\*\/\s*$/.test(before) || !doc.includes('@example');
+    });
+    expect(exported.length).toBeGreaterThan(25);
+    expect(undocumented).toEqual([]);
+  });
+});
