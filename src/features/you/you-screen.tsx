@@ -1,13 +1,20 @@
+import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { router } from 'expo-router';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
+import { ChoiceRow } from '@/components/ui/choice-row';
 import { ComingNext } from '@/components/ui/coming-next';
+import { Field } from '@/components/ui/field';
+import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
+import { useSubmit } from '@/lib/api/use-submit';
 import { useSession } from '@/lib/session/session-provider';
 import { useThemeState, type ThemePreference } from '@/theme/theme-provider';
+import { useLayout } from '@/theme/use-layout';
 import { space } from '@/theme/tokens';
+import { deleteMe, updateMe } from './api';
 
 const THEMES: { value: ThemePreference; label: string }[] = [
   { value: 'system', label: 'Match device' },
@@ -16,44 +23,116 @@ const THEMES: { value: ThemePreference; label: string }[] = [
 ];
 
 export function YouScreen() {
-  const { user, signOut } = useSession();
+  const { user, signOut, updateUser } = useSession();
   const { preference, setPreference } = useThemeState();
+  const { isWide } = useLayout();
+  const [displayName, setDisplayName] = useState(user?.displayName ?? '');
+  const [email, setEmail] = useState(user?.email ?? '');
+  const [currentPassword, setCurrentPassword] = useState('');
+  const [newPassword, setNewPassword] = useState('');
+  const [confirmText, setConfirmText] = useState('');
+  const [done, setDone] = useState<string | null>(null);
+
+  const profile = useSubmit(async () => {
+    const next = await updateMe({ displayName, email });
+    updateUser({ id: next.id, email: next.email, displayName: next.displayName, role: next.role });
+    setDone('Profile saved.');
+  });
+  const password = useSubmit(async () => {
+    await updateMe({ currentPassword, newPassword });
+    setCurrentPassword('');
+    setNewPassword('');
+    // A new password ends every session, this one included.
+    await signOut();
+    router.replace('/sign-in');
+  });
+  const removal = useSubmit(async () => {
+    await deleteMe();
+    await signOut();
+    router.replace('/sign-in');
+  });
+  const confirmWord = 'DELETE';
+
+  const account = (
+    <Card>
+      <Text variant="label" tone="muted">
+        PROFILE
+      </Text>
+      {profile.message ? <Notice tone="error">{profile.message}</Notice> : null}
+      {done ? <Notice tone="ok">{done}</Notice> : null}
+      <Field label="Name" value={displayName} onChangeText={setDisplayName} error={profile.fields.displayName} testID="you-name" />
+      <Field label="E-mail" value={email} onChangeText={setEmail} autoCapitalize="none" keyboardType="email-address" error={profile.fields.email} />
+      <Button label="Save profile" busy={profile.busy} onPress={() => void profile.submit()} testID="you-save" />
+    </Card>
+  );
+
+  const passwordCard = (
+    <Card>
+      <Text variant="label" tone="muted">
+        PASSWORD
+      </Text>
+      {password.message ? <Notice tone="error">{password.message}</Notice> : null}
+      <Field label="Current password" value={currentPassword} onChangeText={setCurrentPassword} secureTextEntry autoComplete="current-password" error={password.fields.currentPassword} />
+      <Field label="New password" value={newPassword} onChangeText={setNewPassword} secureTextEntry autoComplete="new-password" hint="At least 10 characters. You will sign in again." error={password.fields.newPassword} />
+      <Button kind="secondary" label="Change password" busy={password.busy} disabled={!currentPassword || !newPassword} onPress={() => void password.submit()} />
+    </Card>
+  );
+
+  const look = (
+    <Card>
+      <ChoiceRow label="Look" options={THEMES} value={preference} onChange={(value) => setPreference(value as ThemePreference)} testID="theme-choice" />
+      {user?.role === 'admin' ? <Button kind="secondary" label="Open the Console" onPress={() => router.push('/console')} testID="open-console" /> : null}
+      <Button kind="secondary" label="Sign out" onPress={() => void signOut()} testID="sign-out" />
+    </Card>
+  );
+
+  const danger = (
+    <Card>
+      <Text variant="label" tone="danger">
+        DELETE ACCOUNT
+      </Text>
+      <Text tone="muted">Deletes your hunts, notes, keepers, weights and watch patterns for good. Crew you joined keep their own notes.</Text>
+      {removal.message ? <Notice tone="error">{removal.message}</Notice> : null}
+      <Field label={`Type ${confirmWord} to confirm`} value={confirmText} onChangeText={setConfirmText} autoCapitalize="characters" testID="delete-confirm" />
+      <Button kind="danger" label="Delete my account" busy={removal.busy} disabled={confirmText.trim() !== confirmWord} onPress={() => void removal.submit()} testID="delete-account" />
+    </Card>
+  );
+
+  const data = (
+    <ComingNext what="Your data" points={['Export everything as CSV and JSON', 'Import an old log with a preview of every row']} />
+  );
+
   return (
-    <Screen title="You" subtitle="Your account, your look, your data.">
-      <Card>
-        <Text variant="label" tone="muted">
-          SIGNED IN AS
-        </Text>
-        <Text variant="heading">{user?.displayName}</Text>
-        <Text tone="muted">{user?.email}</Text>
-        {user?.role === 'admin' ? (
-          <Button kind="secondary" label="Open the Console" onPress={() => router.push('/console')} />
-        ) : null}
-      </Card>
-      <Card>
-        <Text variant="label" tone="muted">
-          LOOK
-        </Text>
-        <View style={styles.row} accessibilityRole="radiogroup">
-          {THEMES.map((option) => (
-            <Button
-              key={option.value}
-              compact
-              kind={preference === option.value ? 'primary' : 'secondary'}
-              label={option.label}
-              accessibilityRole="radio"
-              accessibilityState={{ checked: preference === option.value }}
-              onPress={() => setPreference(option.value)}
-            />
-          ))}
+    <Screen title="You" subtitle={user ? `${user.displayName} · ${user.email}` : undefined}>
+      {isWide ? (
+        <View style={styles.columns}>
+          <View style={styles.column}>
+            {account}
+            {passwordCard}
+          </View>
+          <View style={styles.column}>
+            {look}
+            {data}
+            {danger}
+          </View>
         </View>
-      </Card>
-      <ComingNext what="Your data" points={['Export everything as CSV and JSON', 'Import an old log with a preview', 'Delete the account']} />
-      <Button kind="danger" label="Sign out" onPress={() => void signOut()} testID="sign-out" />
+      ) : (
+        <>
+          {look}
+          {account}
+          {passwordCard}
+          {data}
+          {danger}
+        </>
+      )}
+      <Text variant="caption" tone="faint">
+        Values in Strapsift are your own estimates, not appraisals. Keep what you hold, and what cash you carry, private.
+      </Text>
     </Screen>
   );
 }
 
 const styles = StyleSheet.create({
-  row: { flexDirection: 'row', gap: space.sm, flexWrap: 'wrap' },
+  columns: { flexDirection: 'row', gap: space.xl, alignItems: 'flex-start' },
+  column: { flex: 1, gap: space.lg },
 });

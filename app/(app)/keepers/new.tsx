@@ -1,0 +1,1 @@
+export { KeeperNewScreen as default } from '@/features/keepers/keeper-new-screen';
