@@ -245,28 +245,6 @@ function ladderMiss(): NearMiss {
   return missTo(best);
 }
 
-function missOf(pattern: NearMissPatternId): NearMiss {
-  switch (pattern) {
-    case 'binary':
-      return exactlyKMiss(2);
-    case 'trinary':
-      return exactlyKMiss(3);
-    case 'solid':
-      return solidMiss();
-    case 'radar':
-      return radarMiss();
-    case 'repeater':
-      return repeaterMiss();
-    case 'ladder':
-      return ladderMiss();
-  }
-}
-
-/** Near miss of one pattern for a value already known to be a serial. */
-export function nearMissOfValue(value: number, pattern: NearMissPatternId): NearMiss {
-  load(value);
-  return missOf(pattern);
-}
 
 /** All six near misses of a value already known to be a serial. */
 export function nearMissesOfValue(value: number): Record<NearMissPatternId, NearMiss> {

@@ -69,12 +69,6 @@ function around({ list, starts, texts }: Indexed, value: number): Neighbours {
   return { below, above: after };
 }
 
-/** Neighbours of a value already known to be a serial. */
-export function neighboursOfValue(value: number, pattern: NeighbourPatternId): Neighbours {
-  const index = NEIGHBOUR_PATTERNS.indexOf(pattern);
-  return around(allIndexed()[index]!, value);
-}
-
 /** Neighbours for all eight patterns, as a reading carries them. */
 export function allNeighboursOfValue(value: number): Record<NeighbourPatternId, Neighbours> {
   const l = allIndexed();

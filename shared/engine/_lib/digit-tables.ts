@@ -68,8 +68,3 @@ export function digitTables(): DigitTables {
   tables ??= build();
   return tables;
 }
-
-/** The turned form of one digit, or -1. */
-export function turnDigit(d: number): number {
-  return TURN[d as 0] ?? -1;
-}

@@ -116,9 +116,3 @@ export function lowerBound(list: Uint32Array, value: number): number {
   return lo;
 }
 
-/** Bytes held by the member lists built so far. */
-export function memberBytes(): number {
-  let bytes = 0;
-  for (const list of cache.values()) bytes += list.byteLength;
-  return bytes;
-}

@@ -50,11 +50,6 @@ function describe(input: unknown): string {
 /** 8-digit text of a value 0…99,999,999. */
 export { digitText as toDigits } from './digit-text';
 
-/** Digit at 0-based position i (0 = leftmost) of a value. */
-export function digitAt(value: number, i: number): number {
-  return Math.floor(value / 10 ** (7 - i)) % 10;
-}
-
 /** The 8 digits of a value, leftmost first, into a fresh array. */
 export function digitsOf(value: number): number[] {
   const out = new Array<number>(8);
