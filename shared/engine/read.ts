@@ -60,7 +60,9 @@ export function read(input: string, options: ReadOptions = {}): ReadResult {
   const feats = featuresOfValue(value);
   const star = parsed.star || opts.star === true;
   const watch: WatchResult[] = opts.watch === undefined ? [] : watchList(opts.watch).map((p) => watchResultOfValue(value, p));
-  const district = typeof opts.district === 'string' && opts.district !== '' ? opts.district.toUpperCase() : parsed.district;
+  // Only a real district letter overrides the one read from the prefix.
+  const district = typeof opts.district === 'string' && /^[A-L]$/i.test(opts.district) ? opts.district.toUpperCase() : parsed.district;
+  const facility = typeof opts.facility === 'string' ? opts.facility.toUpperCase() : undefined;
   return {
     ok: true,
     input: text,
@@ -87,7 +89,7 @@ export function read(input: string, options: ReadOptions = {}): ReadResult {
     trade: tradeNotes({
       series: typeof opts.series === 'string' ? opts.series : undefined,
       district,
-      facility: opts.facility === 'DC' || opts.facility === 'FW' ? opts.facility : undefined,
+      facility: facility === 'DC' || facility === 'FW' ? facility : undefined,
       star,
       denomination: typeof opts.denomination === 'number' ? opts.denomination : undefined,
     }),

@@ -126,3 +126,17 @@ describe('read', () => {
     expect(JSON.parse(JSON.stringify(r))).toEqual(r);
   });
 });
+
+describe('read options', () => {
+  it('when the district option is not a district letter, then the prefix’s district stands; a real letter overrides it', () => {
+    const kept = read('MB 1234 5678 A', { district: 'Z' });
+    const replaced = read('MB 1234 5678 A', { district: 'k' });
+    expect(kept.ok && kept.district).toBe('B');
+    expect(replaced.ok && replaced.district).toBe('K');
+  });
+
+  it('when the facility is given in lower case, then its trade note still applies', () => {
+    const r = read('12345678', { facility: 'fw' as 'FW' });
+    expect(r.ok && r.trade.map((n) => n.id)).toEqual(['facility']);
+  });
+});
