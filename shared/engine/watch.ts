@@ -183,12 +183,13 @@ function maskMiss(d: readonly number[], mask: string): NearMiss {
 function rangeMiss(d: readonly number[], from: number, to: number): NearMiss {
   const lo = digitsOf(from);
   const hi = digitsOf(to);
-  const memo = new Map<number, number>();
+  // 8 positions × 4 tightness states; -1 = not yet known.
+  const memo = new Int8Array(32).fill(-1);
   const best = (pos: number, tightLo: boolean, tightHi: boolean): number => {
     if (pos === 8) return 0;
     const key = pos * 4 + (tightLo ? 2 : 0) + (tightHi ? 1 : 0);
-    const known = memo.get(key);
-    if (known !== undefined) return known;
+    const known = memo[key]!;
+    if (known >= 0) return known;
     let result = Infinity;
     const first = tightLo ? lo[pos]! : 0;
     const last = tightHi ? hi[pos]! : 9;
@@ -196,7 +197,7 @@ function rangeMiss(d: readonly number[], from: number, to: number): NearMiss {
       const cost = (x === d[pos] ? 0 : 1) + best(pos + 1, tightLo && x === first, tightHi && x === last);
       if (cost < result) result = cost;
     }
-    memo.set(key, result);
+    memo[key] = result;
     return result;
   };
   const target: number[] = [];
