@@ -10,3 +10,10 @@ export const DEMO_ADMIN = {
   password: 'console-demo-2026',
   displayName: 'Ostin Pell',
 } as const;
+
+/** Sifts half of a shared brick with the collector, so the crew view has someone in it. */
+export const DEMO_CREW = {
+  email: 'crew@strapsift.test',
+  password: 'crew-demo-2026',
+  displayName: 'Tobiah Marsh',
+} as const;
