@@ -27,6 +27,8 @@ export function ChoiceRow<T extends string | number>({ label, options, value, on
               key={String(option.value)}
               accessibilityRole="radio"
               accessibilityState={{ checked: selected }}
+              // react-native-web ignores accessibilityState; the ARIA prop carries the choice on the web.
+              aria-checked={selected}
               accessibilityLabel={`${label}: ${option.label}`}
               onPress={() => onChange(option.value)}
               style={[
