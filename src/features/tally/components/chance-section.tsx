@@ -1,0 +1,132 @@
+import { StyleSheet, View } from 'react-native';
+import type { TallyPatternRow } from '@shared/contracts';
+import { DataTable, type Column } from '@/components/ui/data-table';
+import { Notice } from '@/components/ui/notice';
+import { PairedBars } from '@/components/ui/paired-bars';
+import { Text } from '@/components/ui/text';
+import { space } from '@/theme/tokens';
+import { formatChance, formatCount, formatExpected, formatRate, verdict, VERDICT_TEXT } from '../format';
+
+export interface ChanceFigures {
+  notes: number;
+  patterns: readonly TallyPatternRow[];
+  caveat: string;
+}
+
+function VerdictLine({ row }: { row: TallyPatternRow }) {
+  const v = verdict(row.hits, row.expected, row.pAtLeast);
+  return (
+    <Text variant="caption" tone={v === 'lucky' ? 'hit' : v === 'thin' ? 'warn' : 'faint'}>
+      {VERDICT_TEXT[v]}
+    </Text>
+  );
+}
+
+/** The sentence a screen reader hears for the chart: which patterns stand out, or that none do. */
+export function chanceSummary(figures: ChanceFigures): string {
+  const lucky = figures.patterns.filter((row) => verdict(row.hits, row.expected, row.pAtLeast) === 'lucky').map((row) => row.name);
+  const thin = figures.patterns.filter((row) => verdict(row.hits, row.expected, row.pAtLeast) === 'thin').map((row) => row.name);
+  const parts = [`Hits found against hits expected by chance in ${formatCount(figures.notes)} notes.`];
+  if (lucky.length) parts.push(`More than chance: ${lucky.join(', ')}.`);
+  if (thin.length) parts.push(`Fewer than chance: ${thin.join(', ')}.`);
+  if (!lucky.length && !thin.length) parts.push('Every pattern is about what chance predicts.');
+  return parts.join(' ');
+}
+
+const wideColumns: Column<TallyPatternRow>[] = [
+  { key: 'name', header: 'Pattern', flex: 1.4, cell: (row) => row.name },
+  { key: 'hits', header: 'Found', align: 'right', cell: (row) => row.hits },
+  { key: 'rate', header: 'Per 1,000', align: 'right', cell: (row) => <Text variant="mono">{formatRate(row.perThousand)}</Text> },
+  { key: 'expected', header: 'Expected', align: 'right', cell: (row) => <Text variant="mono">{formatExpected(row.expected)}</Text> },
+  {
+    key: 'chance',
+    header: 'Chance of this many',
+    flex: 1.6,
+    align: 'right',
+    cell: (row) => (
+      <View style={styles.stackRight}>
+        <Text variant="mono">{row.hits === 0 ? '—' : formatChance(row.pAtLeast)}</Text>
+        <VerdictLine row={row} />
+      </View>
+    ),
+  },
+];
+
+// A phone has room for four columns: the rate rides under the count.
+const compactColumns: Column<TallyPatternRow>[] = [
+  { key: 'name', header: 'Pattern', flex: 1.2, cell: (row) => row.name },
+  {
+    key: 'hits',
+    header: 'Found',
+    align: 'right',
+    cell: (row) => (
+      <View style={styles.stackRight}>
+        <Text variant="mono">{formatCount(row.hits)}</Text>
+        <Text variant="caption" tone="faint">
+          {formatRate(row.perThousand)}/1k
+        </Text>
+      </View>
+    ),
+  },
+  { key: 'expected', header: 'Expected', align: 'right', cell: (row) => <Text variant="mono">{formatExpected(row.expected)}</Text> },
+  {
+    key: 'chance',
+    header: 'Chance',
+    flex: 1.2,
+    align: 'right',
+    cell: (row) => (
+      <View style={styles.stackRight}>
+        <Text variant="mono">{row.hits === 0 ? '—' : formatChance(row.pAtLeast)}</Text>
+        <VerdictLine row={row} />
+      </View>
+    ),
+  },
+];
+
+/**
+ * Hits per pattern set against chance: the chart and the same numbers in a table, with the engine's
+ * caveat that sequential straps are not independent draws.
+ */
+export function ChanceSection({ figures, wide, testID }: { figures: ChanceFigures; wide: boolean; testID?: string }) {
+  if (figures.notes === 0) {
+    return <Text tone="muted">No notes logged yet, so there is nothing to set against chance.</Text>;
+  }
+  return (
+    <View style={styles.wrap} testID={testID}>
+      <View style={wide ? styles.sideBySide : styles.stacked}>
+        <View style={wide ? styles.chartWide : null}>
+          <PairedBars
+            data={figures.patterns.map((row) => ({ key: row.id, label: row.name, actual: row.hits, expected: row.expected }))}
+            summary={chanceSummary(figures)}
+            formatValue={formatExpected}
+            testID={testID ? `${testID}-chart` : undefined}
+          />
+        </View>
+        <View style={wide ? styles.tableWide : null}>
+          <DataTable
+            label={`Hits per pattern against chance, ${formatCount(figures.notes)} notes`}
+            columns={wide ? wideColumns : compactColumns}
+            rows={figures.patterns}
+            rowKey={(row) => row.id}
+            testID={testID ? `${testID}-table` : undefined}
+          />
+        </View>
+      </View>
+      <Text variant="caption" tone="faint">
+        Chance of this many: the Poisson probability of finding at least this many by luck alone, with the expected count as its mean.
+      </Text>
+      <Notice tone="info" title="Sequential notes are not independent draws">
+        {figures.caveat}
+      </Notice>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: space.md },
+  sideBySide: { flexDirection: 'row', gap: space.xl, alignItems: 'flex-start' },
+  stacked: { gap: space.lg },
+  chartWide: { flex: 1, minWidth: 0 },
+  tableWide: { flex: 1.3, minWidth: 0 },
+  stackRight: { alignItems: 'flex-end' },
+});

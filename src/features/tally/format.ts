@@ -1,0 +1,66 @@
+import { poissonTail } from '@shared/engine';
+
+/** Whole counts with thousands separators: 4,000. */
+export const formatCount = (value: number): string => Math.round(value).toLocaleString('en-US');
+
+/** Hits per 1,000 notes, to two places at most: 7.25, 12, 0.5. */
+export function formatRate(perThousand: number): string {
+  return perThousand.toLocaleString('en-US', { maximumFractionDigits: 2 });
+}
+
+/**
+ * An expected count. Rare patterns expect millionths of a note in a hunt, so small figures keep two
+ * significant digits instead of rounding to a misleading 0, down to a floor below which only "< 0.0001" is honest.
+ */
+export function formatExpected(value: number): string {
+  if (value === 0) return '0';
+  if (value < 0.0001) return '< 0.0001';
+  if (value >= 100) return formatCount(value);
+  if (value >= 1) return value.toLocaleString('en-US', { maximumFractionDigits: 1 });
+  return value.toLocaleString('en-US', { maximumSignificantDigits: 2 });
+}
+
+/** A probability as a person reads it: "32%", "4.1%", then "1 in 250" once it is under 1%. */
+export function formatChance(p: number): string {
+  if (!Number.isFinite(p)) return '—';
+  if (p >= 0.995) return '100%';
+  if (p >= 0.1) return `${Math.round(p * 100)}%`;
+  if (p >= 0.01) return `${(p * 100).toLocaleString('en-US', { maximumFractionDigits: 1 })}%`;
+  if (p <= 0) return '0';
+  const oneIn = 1 / p;
+  return oneIn >= 1e9 ? 'under 1 in a billion' : `1 in ${formatCount(oneIn)}`;
+}
+
+export type Verdict = 'lucky' | 'thin' | 'chance';
+
+/** Past this, a count is called out as unusual either way (a two-sided reading of the 5% rule of thumb). */
+const SURPRISE = 0.025;
+
+/**
+ * Whether a count stands out from chance: "lucky" when this many or more was unlikely, "thin" when
+ * this few or fewer was unlikely (a picked-over bank), otherwise what chance predicts.
+ *
+ * @example
+ * verdict(5, 0.5, 0.00017) // 'lucky'
+ */
+export function verdict(hits: number, expected: number, pAtLeast: number): Verdict {
+  if (hits > 0 && hits > expected && pAtLeast < SURPRISE) return 'lucky';
+  // P(X ≤ hits) = 1 − P(X ≥ hits + 1).
+  if (hits < expected && 1 - poissonTail(hits + 1, expected) < SURPRISE) return 'thin';
+  return 'chance';
+}
+
+export const VERDICT_TEXT: Record<Verdict, string> = {
+  lucky: 'more than chance',
+  thin: 'fewer than chance',
+  chance: 'about chance',
+};
+
+/** "Mon, Mar 2, 2026" in the device's time zone. */
+export function formatDate(iso: string): string {
+  return new Date(iso).toLocaleDateString('en-US', { weekday: 'short', month: 'short', day: 'numeric', year: 'numeric' });
+}
+
+export function formatShortDate(iso: string): string {
+  return new Date(iso).toLocaleDateString('en-US', { month: 'short', day: 'numeric' });
+}
