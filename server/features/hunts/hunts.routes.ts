@@ -8,27 +8,30 @@ import type { HuntsService } from './hunts.service';
 
 export function huntsRoutes(hunts: HuntsService, requireAuth: RequestHandler): Router {
   const router = Router();
-  router.use('/hunts', requireAuth);
   router.get(
     '/hunts',
+    requireAuth,
     route(async (req, res) => {
       res.json(await hunts.list(currentUser(req).id, parse(huntListQuery, req.query)));
     }),
   );
   router.post(
     '/hunts',
+    requireAuth,
     route(async (req, res) => {
       res.status(201).json(await hunts.create(currentUser(req).id, parse(createHuntRequest, req.body)));
     }),
   );
   router.get(
     '/hunts/:id',
+    requireAuth,
     route(async (req, res) => {
       res.json(await hunts.get(currentUser(req).id, parse(idParams, req.params).id));
     }),
   );
   router.patch(
     '/hunts/:id',
+    requireAuth,
     route(async (req, res) => {
       const { id } = parse(idParams, req.params);
       res.json(await hunts.update(currentUser(req).id, id, parse(updateHuntRequest, req.body)));
@@ -36,6 +39,7 @@ export function huntsRoutes(hunts: HuntsService, requireAuth: RequestHandler): R
   );
   router.delete(
     '/hunts/:id',
+    requireAuth,
     route(async (req, res) => {
       await hunts.remove(currentUser(req).id, parse(idParams, req.params).id);
       res.status(204).end();
@@ -43,6 +47,7 @@ export function huntsRoutes(hunts: HuntsService, requireAuth: RequestHandler): R
   );
   router.post(
     '/hunts/:id/close',
+    requireAuth,
     route(async (req, res) => {
       res.json(await hunts.close(currentUser(req).id, parse(idParams, req.params).id));
     }),
