@@ -1,32 +1,59 @@
 import { lowerBound, membersOf } from './_lib/members';
-import { BIT, isPatternId, maskToIds } from './_lib/pattern-bits';
+import { idsToMask, isPatternId, maskToIds } from './_lib/pattern-bits';
 import { DOMAIN_LAST, serialValue, toDigits } from './_lib/serial-value';
-import { DEFAULT_LOW_LIMIT, HIGH_FROM, PATTERN_IDS, isLowLimit } from './patterns';
+import { DEFAULT_LOW_LIMIT, HIGH_FROM, PATTERN_IDS, isLowLimit, patternMask } from './patterns';
 import type { LowLimit, PatternId, SerialInput, SweepHit, SweepResult } from './types';
 
 /** Longest range one sweep covers: a brick is 4,000 notes, so this is generous. */
 export const MAX_SWEEP = 10_000_000;
 
-/** A sorted run of members inside the range: an index window on a member list, or a band of values. */
-interface Source {
-  bit: number;
-  list: Uint32Array | null;
-  next: number;
-  end: number;
+let sharedIds: ReadonlyArray<readonly PatternId[]> | null = null;
+
+/** One frozen id list per mask, shared by all hits: a sweep can return 80,000 hits. */
+function idsFor(mask: number): readonly PatternId[] {
+  sharedIds ??= Array.from({ length: 1024 }, (_, m) => Object.freeze(maskToIds(m)));
+  return sharedIds[mask]!;
 }
 
-function sourceFor(id: PatternId, first: number, last: number, lowLimit: number): Source {
+/** Members of `id` in [first, last], ascending (the low and high bands are plain intervals). */
+function membersIn(id: PatternId, first: number, last: number, lowLimit: number): Uint32Array {
   if (id === 'low' || id === 'high') {
     const from = id === 'low' ? first : Math.max(first, HIGH_FROM);
     const to = id === 'low' ? Math.min(last, lowLimit) : last;
-    return { bit: BIT[id], list: null, next: from, end: to + 1 };
+    const out = new Uint32Array(Math.max(0, to - from + 1));
+    for (let i = 0; i < out.length; i++) out[i] = from + i;
+    return out;
   }
   const list = membersOf(id);
-  return { bit: BIT[id], list, next: lowerBound(list, first), end: lowerBound(list, last + 1) };
+  return list.subarray(lowerBound(list, first), lowerBound(list, last + 1));
 }
 
-function head(s: Source): number {
-  return s.list === null ? s.next : s.list[s.next]!;
+/** Sorted union of sorted lists, without repeats. */
+function union(lists: Uint32Array[]): Uint32Array {
+  if (lists.length === 1) return lists[0]!;
+  // The big list (trinaries) is merged once with the sorted rest, which are small.
+  lists.sort((a, b) => b.length - a.length);
+  const big = lists[0]!;
+  let restSize = 0;
+  for (let i = 1; i < lists.length; i++) restSize += lists[i]!.length;
+  const rest = new Uint32Array(restSize);
+  let at = 0;
+  for (let i = 1; i < lists.length; i++) {
+    rest.set(lists[i]!, at);
+    at += lists[i]!.length;
+  }
+  rest.sort();
+  const out = new Uint32Array(big.length + rest.length);
+  let i = 0;
+  let j = 0;
+  let n = 0;
+  let previous = -1;
+  while (i < big.length || j < rest.length) {
+    const v = j >= rest.length || (i < big.length && big[i]! <= rest[j]!) ? big[i++]! : rest[j++]!;
+    if (v !== previous) out[n++] = v;
+    previous = v;
+  }
+  return out.subarray(0, n);
 }
 
 /**
@@ -35,7 +62,9 @@ function head(s: Source): number {
  * Jumps from member to member by merging the patterns' sorted member lists
  * (the low and high bands are plain intervals), so the cost follows the number
  * of hits, not the length of the range. A range that would pass 99999999
- * stops there (`truncated: true`). Throws RangeError when `first` is not a
+ * stops there (`truncated: true`). Each hit's `patterns` list is frozen and
+ * shared between hits with the same patterns (a sweep can return 80,000 hits).
+ * Throws RangeError when `first` is not a
  * serial, `count` is not 1…10,000,000 or a pattern id is unknown.
  *
  * @example
@@ -58,24 +87,13 @@ export function sweep(
   if (!isLowLimit(lowLimit)) throw new RangeError('sweep: lowLimit must be 9, 99, 999, 9999 or 99999');
   const wanted = PATTERN_IDS.filter((id) => patterns.includes(id));
   const last = Math.min(DOMAIN_LAST, start + count - 1);
-  const sources = wanted.map((id) => sourceFor(id, start, last, lowLimit)).filter((s) => s.next < s.end);
-  const hits: SweepHit[] = [];
-  while (sources.length > 0) {
-    let value = Infinity;
-    for (const s of sources) {
-      const h = head(s);
-      if (h < value) value = h;
-    }
-    let mask = 0;
-    for (let i = sources.length - 1; i >= 0; i--) {
-      const s = sources[i]!;
-      if (head(s) === value) {
-        mask |= s.bit;
-        s.next++;
-        if (s.next >= s.end) sources.splice(i, 1);
-      }
-    }
-    hits.push({ serial: toDigits(value), value, patterns: maskToIds(mask) });
+  const wantedMask = idsToMask(wanted);
+  const values = wanted.length === 0 ? new Uint32Array(0) : union(wanted.map((id) => membersIn(id, start, last, lowLimit)));
+  // Each serial's requested patterns come from its own mask: exact, and no bookkeeping across lists.
+  const hits = new Array<SweepHit>(values.length);
+  for (let k = 0; k < values.length; k++) {
+    const value = values[k]!;
+    hits[k] = { serial: toDigits(value), value, patterns: idsFor(patternMask(value, lowLimit) & wantedMask) };
   }
   return {
     first: start,

@@ -277,8 +277,8 @@ export type ReadResult = Reading | ReadingFailure;
 export interface SweepHit {
   serial: string;
   value: number;
-  /** The requested patterns this serial has, in PATTERN_IDS order. */
-  patterns: PatternId[];
+  /** The requested patterns this serial has, in PATTERN_IDS order (frozen, shared between hits). */
+  patterns: readonly PatternId[];
 }
 
 export interface SweepResult {
