@@ -13,7 +13,7 @@ import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import type { AddressInfo } from 'node:net';
 import os from 'node:os';
 import { join, resolve } from 'node:path';
-import { Client } from 'pg';
+import { DataSource } from 'typeorm';
 
 // The logger reads these when it is first imported, so they are set before the app is loaded.
 process.env.LOG_LEVEL = 'silent';
@@ -67,13 +67,13 @@ function scans(huntId: string, count: number, strapFrom = 1) {
 }
 
 async function recreateDatabase(drop: boolean): Promise<void> {
-  const client = new Client({ connectionString: adminUrl });
-  await client.connect();
+  const admin = new DataSource({ type: 'postgres', url: adminUrl });
+  await admin.initialize();
   try {
-    await client.query(`DROP DATABASE IF EXISTS ${DB} WITH (FORCE)`);
-    if (!drop) await client.query(`CREATE DATABASE ${DB}`);
+    await admin.query(`DROP DATABASE IF EXISTS ${DB} WITH (FORCE)`);
+    if (!drop) await admin.query(`CREATE DATABASE ${DB}`);
   } finally {
-    await client.end();
+    await admin.destroy();
   }
 }
 
