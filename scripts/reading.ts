@@ -65,7 +65,7 @@ function parseArgs(argv: string[]): Cli {
       case '--help':
       case '-h':
         process.stdout.write(`${USAGE}\n`);
-        process.exit(0);
+        return process.exit(0);
       case '--json':
         cli.json = true;
         break;
