@@ -29,7 +29,7 @@ describe('scripts/reading.ts', () => {
     expect(good).toMatchObject({ input: '27272727', ok: true, patterns: direct.patterns, odds: direct.odds, score: direct.score });
     expect(starred.digits).toBe('00000001');
     expect(bad).toEqual({ input: '12 34', ok: false, error: { code: 'too-few-digits', message: 'A serial has 8 digits; this has 4.' } });
-  });
+  }, 60_000);
 
   it('when run without --json, then it prints a header and one table row per serial', () => {
     const { status, lines } = run([], '27272727\n12 34\n');
@@ -37,18 +37,18 @@ describe('scripts/reading.ts', () => {
     expect(lines[0]).toMatch(/^input\s+digits\s+patterns/);
     expect(lines[1]).toContain('repeater, super repeater, binary');
     expect(lines[2]).toContain('error: A serial has 8 digits');
-  });
+  }, 60_000);
 
   it('when asked to --sweep a range, then it lists each hit and a summary', () => {
     const { status, lines } = run(['--sweep', '11111100', '30', '--patterns', 'solid,radar'], '');
     expect(status).toBe(0);
     expect(lines).toContain('11111111  solid, radar');
     expect(lines.at(-1)).toBe('1 hits in 11111100–11111129, 30 serials');
-  });
+  }, 60_000);
 
   it('when an option is wrong, then it exits 2 with the reason', () => {
     const { status, stderr } = run(['--low-limit', '50'], '');
     expect(status).toBe(2);
     expect(stderr).toContain('--low-limit must be');
-  });
+  }, 60_000);
 });

@@ -82,6 +82,6 @@ describe('nearMiss', () => {
         }),
         { numRuns: runs },
       );
-    });
+    }, 60_000);
   }
 });

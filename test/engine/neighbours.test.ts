@@ -52,6 +52,6 @@ describe('neighbours', () => {
         }),
         { numRuns: runs },
       );
-    });
+    }, 60_000);
   }
 });

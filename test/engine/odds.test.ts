@@ -40,7 +40,7 @@ describe('patternCount', () => {
   it('when binaries and trinaries are enumerated one by one from the definition, then there are as many as the formula says', () => {
     expect(plainMembers('binary').length).toBe(patternCount('binary'));
     expect(plainMembers('trinary').length).toBe(patternCount('trinary'));
-  });
+  }, 60_000);
 
   it('when palindromes and repeaters are counted, then there are 10^4 − 1 = 9,999 of each (TRADE.md: 00000000 excluded)', () => {
     expect(patternCount('radar')).toBe(10 ** 4 - 1);
@@ -164,7 +164,7 @@ describe('odds, runs and counts', () => {
       expect(runAtLeastStrings(5, k)).toBe(runs);
       expect(repeatAtLeastStrings(5, k)).toBe(repeats);
     }
-  });
+  }, 60_000);
 
   it('when runs and repeats of all eight are counted over serials, then they are the 9 solids, and length 1 covers the domain', () => {
     expect(runCount(8)).toBe(patternCount('solid'));

@@ -94,7 +94,7 @@ describe('classify', () => {
         expect(ids).toEqual(plainPatterns(s));
       }
     }
-  });
+  }, 60_000);
 
   it('when hasPattern is asked, then it agrees with classify', () => {
     fc.assert(

@@ -50,7 +50,7 @@ describe('sweep', () => {
       const expected = plainMembers(id).filter((v) => v >= 10_000_000 && v <= 19_999_999).length;
       expect(result.hits.filter((h) => h.patterns.includes(id)).length).toBe(expected);
     }
-  });
+  }, 60_000);
 
   it('when the count or first serial or a pattern is wrong, then it refuses with a RangeError', () => {
     expect(() => sweep('00000000', 10)).toThrow(RangeError);
@@ -79,5 +79,5 @@ describe('sweep', () => {
       ),
       { numRuns: 40 },
     );
-  });
+  }, 60_000);
 });

@@ -136,7 +136,7 @@ describe('matchWatch', () => {
       }),
       { numRuns: 300 },
     );
-  });
+  }, 60_000);
 
   it('when given a non-serial or an invalid pattern, then it refuses with a RangeError', () => {
     expect(() => matchWatch('00000000', parsed('1234????'))).toThrow(RangeError);
