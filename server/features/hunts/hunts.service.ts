@@ -122,7 +122,7 @@ export class HuntsService {
   private async summarise(userId: string, rows: HuntListRow[]): Promise<HuntSummary[]> {
     if (rows.length === 0) return [];
     const ids = rows.map((row) => row.id);
-    const { weights } = await this.weights.readingContext(userId);
+    const weights = await this.weights.activeWeights(userId);
     const [stats, best] = await Promise.all([
       this.dataSource.query(
         `SELECT hunt_id,
