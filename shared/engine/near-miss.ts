@@ -130,43 +130,62 @@ let top0 = -1;
 let top1 = -1;
 let top2 = -1;
 
-function consider(digit: number, c: number, counts: number[]): void {
-  if (c === 0) return;
-  if (c > counts[0]!) {
-    top2 = top1;
-    counts[2] = counts[1]!;
-    top1 = top0;
-    counts[1] = counts[0]!;
-    top0 = digit;
-    counts[0] = c;
-  } else if (c > counts[1]!) {
-    top2 = top1;
-    counts[2] = counts[1]!;
-    top1 = digit;
-    counts[1] = c;
-  } else if (c > counts[2]!) {
-    top2 = digit;
-    counts[2] = c;
+function findTops(): void {
+  let t0 = -1;
+  let t1 = -1;
+  let t2 = -1;
+  let c0 = 0;
+  let c1 = 0;
+  let c2 = 0;
+  let low = countsLow;
+  for (let digit = 0; digit < 10; digit++) {
+    let c: number;
+    if (digit < 8) {
+      c = low & 15;
+      low >>>= 4;
+    } else {
+      c = (countsHigh >>> (4 * (digit - 8))) & 15;
+    }
+    if (c > c0) {
+      t2 = t1;
+      c2 = c1;
+      t1 = t0;
+      c1 = c0;
+      t0 = digit;
+      c0 = c;
+    } else if (c > c1) {
+      t2 = t1;
+      c2 = c1;
+      t1 = digit;
+      c1 = c;
+    } else if (c > c2) {
+      t2 = digit;
+      c2 = c;
+    }
   }
+  top0 = t0;
+  top1 = t1;
+  top2 = t2;
+  topsReady = true;
 }
 
-const topCounts = [0, 0, 0];
+/** Nibble mask (0xF per position) for each 8-bit position mask. */
+let nibblesOf: Int32Array | null = null;
 
-function findTops(): void {
-  top0 = -1;
-  top1 = -1;
-  top2 = -1;
-  topCounts[0] = 0;
-  topCounts[1] = 0;
-  topCounts[2] = 0;
-  let low = countsLow;
-  for (let digit = 0; digit < 8; digit++) {
-    consider(digit, low & 15, topCounts);
-    low >>>= 4;
+function buildNibbles(): Int32Array {
+  const out = new Int32Array(256);
+  for (let m = 0; m < 256; m++) {
+    let x = 0;
+    for (let i = 0; i < 8; i++) if (m & (1 << i)) x |= 15 << (4 * i);
+    out[m] = x;
   }
-  consider(8, countsHigh & 15, topCounts);
-  consider(9, (countsHigh >>> 4) & 15, topCounts);
-  topsReady = true;
+  nibblesOf = out;
+  return out;
+}
+
+/** 8-bit mask of the positions holding `digit`. */
+function positionsOfDigit(digit: number): number {
+  return ~nibbleMask(serialBcd ^ Math.imul(digit, 0x11111111)) & 0xff;
 }
 
 /**
@@ -184,11 +203,10 @@ function exactlyKMiss(k: number): NearMiss {
   const t2 = top2;
   let target = serialBcd;
   if (distinctDigits > k) {
-    for (let nibble = 0; nibble < 8; nibble++) {
-      const shift = 4 * nibble;
-      const digit = (serialBcd >>> shift) & 15;
-      if (digit !== t0 && digit !== t1 && (k === 2 || digit !== t2)) target = (target & ~(15 << shift)) | (t0 << shift);
-    }
+    // Keep the positions of the top k digits; every other position becomes the top digit.
+    const keep = positionsOfDigit(t0) | positionsOfDigit(t1) | (k === 3 ? positionsOfDigit(t2) : 0);
+    const kept = (nibblesOf ?? buildNibbles())[keep]!;
+    target = (serialBcd & kept) | (Math.imul(t0, 0x11111111) & ~kept);
   } else {
     let fresh = 0;
     let need = k - distinctDigits;
