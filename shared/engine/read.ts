@@ -11,17 +11,43 @@ import { DEFAULT_WEIGHTS, scoreAt } from './score';
 import type { LowLimit, ReadOptions, ReadResult, WatchPattern, WatchResult } from './types';
 import { parseWatchPattern, validWatchPattern, watchResultOfValue } from './watch';
 
+// A hunter's watch list is the same for every note of a session, so each entry
+// is checked once: texts in a small map, pattern objects by identity.
+const checkedTexts = new Map<string, WatchPattern | null>();
+const checkedObjects = new WeakMap<object, WatchPattern | null>();
+
+/** Cached patterns are shared by every reading that lists them, so they are frozen. */
+function frozen(pattern: WatchPattern | null): WatchPattern | null {
+  if (pattern && pattern.kind === 'date') Object.freeze(pattern.formats);
+  return pattern && Object.freeze(pattern);
+}
+
+function checkedWatch(item: unknown): WatchPattern | null {
+  if (typeof item === 'string') {
+    let known = checkedTexts.get(item);
+    if (known === undefined) {
+      const parsed = parseWatchPattern(item);
+      known = frozen(parsed.ok ? parsed.pattern : null);
+      if (checkedTexts.size >= 1000) checkedTexts.clear();
+      checkedTexts.set(item, known);
+    }
+    return known;
+  }
+  if (typeof item !== 'object' || item === null) return null;
+  let known = checkedObjects.get(item);
+  if (known === undefined) {
+    known = frozen(validWatchPattern(item));
+    checkedObjects.set(item, known);
+  }
+  return known;
+}
+
 function watchList(items: ReadOptions['watch']): WatchPattern[] {
   if (!Array.isArray(items)) return [];
   const list: WatchPattern[] = [];
   for (const item of items) {
-    if (typeof item === 'string') {
-      const parsed = parseWatchPattern(item);
-      if (parsed.ok) list.push(parsed.pattern);
-    } else {
-      const valid = validWatchPattern(item);
-      if (valid) list.push(valid);
-    }
+    const pattern = checkedWatch(item);
+    if (pattern) list.push(pattern);
   }
   return list;
 }

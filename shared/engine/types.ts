@@ -230,7 +230,11 @@ export interface ReadOptions {
   lowLimit?: LowLimit;
   /** Weight table for the score; defaults to DEFAULT_WEIGHTS. */
   weights?: WeightTable;
-  /** Watch patterns (parsed objects, or text in `parseWatchPattern` syntax; bad text is skipped). */
+  /**
+   * Watch patterns (parsed objects, or text in `parseWatchPattern` syntax; bad ones are skipped).
+   * Each is checked once and remembered (objects by identity), so replace an object rather than
+   * changing it; the patterns a reading returns are frozen.
+   */
   watch?: ReadonlyArray<WatchPattern | string>;
   /** True marks a star note even when the text had no star. */
   star?: boolean;

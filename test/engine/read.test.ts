@@ -140,3 +140,15 @@ describe('read options', () => {
     expect(r.ok && r.trade.map((n) => n.id)).toEqual(['facility']);
   });
 });
+
+describe('read watch list', () => {
+  it('when the same watch list is read twice, then the results agree and the shared patterns cannot be changed', () => {
+    const watch = ['0704????', { kind: 'date', date: '1776-07-04', formats: ['MMDDYYYY'] } as const];
+    const first = read('07041776', { watch: [...watch] });
+    const second = read('07041776', { watch: [...watch] });
+    if (!first.ok || !second.ok) throw new Error('must read');
+    expect(second.watch).toEqual(first.watch);
+    expect(first.watch.map((w) => w.matched)).toEqual([true, true]);
+    expect(Object.isFrozen(first.watch[1]!.pattern)).toBe(true);
+  });
+});

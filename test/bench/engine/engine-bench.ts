@@ -161,12 +161,34 @@ function batched<T>(inputs: T[], batch: number, fn: (input: T) => unknown): { me
   return { median: median(perItem), p95: percentile(perItem, 0.95) };
 }
 
+/** Median over batches of the fastest of three timings of each batch, per item in ns. */
+function bestOfThree<T>(inputs: T[], batch: number, fn: (input: T) => unknown): number {
+  const perItem: number[] = [];
+  for (let i = 0; i + batch <= inputs.length; i += batch) {
+    let best = Infinity;
+    for (let r = 0; r < 3; r++) {
+      const t0 = performance.now();
+      for (let j = i; j < i + batch; j++) fn(inputs[j]!);
+      best = Math.min(best, performance.now() - t0);
+    }
+    perItem.push((best * 1e6) / batch);
+  }
+  return median(perItem);
+}
+
 // 3. A full reading.
 {
   const inputs = serials(220_000, 11).map(pad);
   batched(inputs.slice(0, 20_000), 100, (s) => read(s));
   const { median: m, p95 } = batched(inputs.slice(20_000), 100, (s) => read(s));
-  record('read(): full reading, 200,000 random serials in batches of 100', `median ${fmt(m / 1000, 2)} µs, p95 ${fmt(p95 / 1000, 2)} µs`, 'median ≤ 2 µs', m <= 2000);
+  // The same batches timed three times each, fastest kept: what is left once the scheduler's interruptions are gone.
+  const quiet = bestOfThree(inputs.slice(20_000), 100, (s) => read(s));
+  record(
+    'read(): full reading, 200,000 random serials in batches of 100',
+    `median ${fmt(m / 1000, 2)} µs, p95 ${fmt(p95 / 1000, 2)} µs (each batch best of 3: median ${fmt(quiet / 1000, 2)} µs)`,
+    'median ≤ 2 µs',
+    m <= 2000,
+  );
   const keypad = serials(50_000, 13).map((v) => `MB ${pad(v).slice(0, 4)} ${pad(v).slice(4)} *`);
   const typed = batched(keypad, 100, (s) => read(s, { series: '2013', watch: ['0704????', 'date:1999-12-31'] }));
   record('read() with prefix, star, series and two watch patterns', `median ${fmt(typed.median / 1000, 2)} µs`, '', null);
