@@ -13,6 +13,7 @@ import {
   score,
   signatureCount,
 } from '../../shared/engine';
+import type { WatchPattern } from '../../shared/engine';
 import { pad8 } from './_oracles';
 
 describe('read', () => {
@@ -143,7 +144,8 @@ describe('read options', () => {
 
 describe('read watch list', () => {
   it('when the same watch list is read twice, then the results agree and the shared patterns cannot be changed', () => {
-    const watch = ['0704????', { kind: 'date', date: '1776-07-04', formats: ['MMDDYYYY'] } as const];
+    const date: WatchPattern = { kind: 'date', date: '1776-07-04', formats: ['MMDDYYYY'] };
+    const watch = ['0704????', date];
     const first = read('07041776', { watch: [...watch] });
     const second = read('07041776', { watch: [...watch] });
     if (!first.ok || !second.ok) throw new Error('must read');
