@@ -9,7 +9,8 @@ import { UserEntity } from '../users/user.entity';
 @Entity({ name: 'scans' })
 // Keyset pages (newest first), tallies and strap sheets all start from a hunt.
 @Index('scans_hunt_time', ['huntId', 'scannedAt', 'id'])
-@Index('scans_hunt_points', ['huntId', 'points'])
+// Best finds only: partial, because most notes score 0 and every index entry slows a 1,000-scan batch.
+@Index('scans_hunt_best', ['huntId', 'points'], { where: '"points" > 0' })
 @Index('scans_user', ['userId'])
 export class ScanEntity {
   @PrimaryColumn({ type: 'uuid' })

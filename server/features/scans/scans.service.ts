@@ -108,20 +108,15 @@ export class ScansService {
       });
     }
 
-    // A note already stored (or deleted after upload) is a duplicate even if it would be rejected now,
-    // e.g. because the hunt closed since: the device should drop it, not show an error.
-    const known = await this.knownIds([...prepared.map((p) => p.id), ...rejected.map((r) => r.id)]);
-    const stillRejected = rejected.filter((r) => !known.has(r.id));
+    // A rejected note that was already stored (or deleted after upload) is a duplicate: the device should
+    // drop it, not show an error, e.g. when the hunt closed after the first upload.
+    const known = await this.knownIds(rejected.map((r) => r.id));
     for (const r of rejected) if (known.has(r.id)) duplicates.push(r.id);
-    const toInsert = prepared.filter((p) => {
-      if (!known.has(p.id)) return true;
-      duplicates.push(p.id);
-      return false;
-    });
+    const stillRejected = rejected.filter((r) => !known.has(r.id));
 
-    const stored = toInsert.length ? await this.insert(userId, toInsert) : new Set<string>();
-    for (const p of toInsert) if (!stored.has(p.id)) duplicates.push(p.id);
-    return { stored: toInsert.filter((p) => stored.has(p.id)).map((p) => p.id), duplicates, rejected: stillRejected };
+    const stored = prepared.length ? await this.insert(userId, prepared) : new Set<string>();
+    for (const p of prepared) if (!stored.has(p.id)) duplicates.push(p.id);
+    return { stored: prepared.filter((p) => stored.has(p.id)).map((p) => p.id), duplicates, rejected: stillRejected };
   }
 
   private async knownIds(ids: string[]): Promise<Set<string>> {
@@ -133,7 +128,8 @@ export class ScansService {
     return new Set(rows.map((row) => row.id));
   }
 
-  // One statement over parallel arrays: a fixed number of parameters whatever the batch size.
+  // One statement over parallel arrays: a fixed number of parameters whatever the batch size. Ids in
+  // scan_tombstones were deleted after an earlier upload and must not come back.
   private async insert(userId: string, scans: Prepared[]): Promise<Set<string>> {
     const rows: Array<{ id: string }> = await this.dataSource.query(
       `INSERT INTO scans (id, hunt_id, user_id, strap, serial, digits, value, prefix, suffix, star, district, pulled, pattern_mask, points, keep, scanned_at)
@@ -142,6 +138,7 @@ export class ScansService {
          FROM unnest($2::uuid[], $3::uuid[], $4::int[], $5::varchar[], $6::varchar[], $7::int[], $8::varchar[], $9::varchar[],
                      $10::bool[], $11::varchar[], $12::bool[], $13::int[], $14::float8[], $15::bool[], $16::timestamptz[])
            AS t(id, hunt_id, strap, serial, digits, value, prefix, suffix, star, district, pulled, pattern_mask, points, keep, scanned_at)
+        WHERE NOT EXISTS (SELECT 1 FROM scan_tombstones d WHERE d.id = t.id)
        ON CONFLICT (id) DO NOTHING
        RETURNING id`,
       [
