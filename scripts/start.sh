@@ -25,10 +25,8 @@ say "seeding demo data"
 node_modules/.bin/tsx server/db/seed/run-seed.ts || die "seeding failed"
 ensure_web_export
 
-if [ -f scripts/fakes.ts ]; then
-  node_modules/.bin/tsx scripts/fakes.ts &
-  PIDS+=($!)
-fi
+node_modules/.bin/tsx scripts/fakes.ts &
+PIDS+=($!)
 
 node_modules/.bin/tsx server/main.ts &
 SERVER_PID=$!
@@ -44,6 +42,7 @@ cat >&2 <<MSG
   Strapsift is running at  http://$HOST:$PORT
   Demo collector:          demo@strapsift.test  /  sift-demo-2026
   Demo admin:              admin@strapsift.test /  console-demo-2026
+  Development inbox:       http://127.0.0.1:${INBOX_PORT:-8025}  (mail the app sent: reset links, invitations)
   Press Ctrl-C to stop (the server and the PostgreSQL this command started).
 
 MSG

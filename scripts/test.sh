@@ -30,6 +30,20 @@ export TEST_DATABASE_URL="$(database_url "${P}_test")"
 export MIGRATIONS_DATABASE_URL="$(database_url "${P}_migrations")"
 DATABASE_URL="$TEST_DATABASE_URL" run_migrations
 
+# The local stand-ins for S3 and SMTP, on their own ports so a running `npm start` is left alone.
+# A prefix other than the default shifts the ports, so two checkouts' runs don't collide.
+OFFSET=0
+[ "$P" = strapsift ] || OFFSET=$(( $(printf '%s' "$P" | cksum | cut -d' ' -f1) % 40 + 1 ))
+export S3_PORT="${TEST_S3_PORT:-$((4579 + OFFSET))}" SMTP_PORT="${TEST_SMTP_PORT:-$((2535 + OFFSET))}" INBOX_PORT="${TEST_INBOX_PORT:-$((8035 + OFFSET))}"
+export S3_ENDPOINT="http://127.0.0.1:$S3_PORT" SMTP_HOST=127.0.0.1 MAIL_DIR="$DATA_DIR/mail-${P}"
+rm -rf "$DATA_DIR/mail-${P}" "$DATA_DIR/s3-${P}"
+FAKES_PREFIX="$P" node_modules/.bin/tsx scripts/fakes.ts >"$DATA_DIR/fakes-${P}.log" 2>&1 &
+PIDS+=($!)
+for _ in $(seq 1 100); do
+  curl -fs "http://127.0.0.1:$INBOX_PORT/" >/dev/null 2>&1 && break
+  sleep 0.1
+done
+
 # QUICK=1 skips the web export and the served app, for a fast loop on engine or server tests
 # (pass a project too: QUICK=1 npm test -- --project server). CI never sets it.
 if [ "${QUICK:-0}" != 1 ]; then
@@ -41,10 +55,6 @@ E2E_DB_URL="$(database_url "${P}_e2e")"
 DATABASE_URL="$E2E_DB_URL" run_migrations
 DATABASE_URL="$E2E_DB_URL" node_modules/.bin/tsx server/db/seed/run-seed.ts >"$DATA_DIR/e2e-seed.log" 2>&1 \
   || { cat "$DATA_DIR/e2e-seed.log" >&2; die "seeding the browser-test database failed"; }
-if [ -f scripts/fakes.ts ]; then
-  FAKES_PREFIX=e2e node_modules/.bin/tsx scripts/fakes.ts >"$DATA_DIR/e2e-fakes.log" 2>&1 &
-  PIDS+=($!)
-fi
 DATABASE_URL="$E2E_DB_URL" PORT="$E2E_PORT" HOST=127.0.0.1 node_modules/.bin/tsx server/main.ts >"$DATA_DIR/e2e-server.log" 2>&1 &
 PIDS+=($!)
 E2E_SERVER_PID=$!

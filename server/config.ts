@@ -16,6 +16,20 @@ const configSchema = z.object({
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   WEB_DIST: z.string().default('dist'),
   PUBLIC_URL: z.string().url().optional(),
+  // Photos go to S3 through the AWS SDK; locally that is the s3rver fake that scripts/fakes.ts starts.
+  S3_ENDPOINT: z.string().url().default('http://127.0.0.1:4569'),
+  S3_REGION: z.string().min(1).default('us-east-1'),
+  S3_BUCKET: z.string().min(3).default('strapsift-photos'),
+  S3_ACCESS_KEY_ID: z.string().min(1).default('S3RVER'),
+  S3_SECRET_ACCESS_KEY: z.string().min(1).default('S3RVER'),
+  S3_FORCE_PATH_STYLE: z.enum(['true', 'false']).default('true'),
+  // Mail goes over SMTP with nodemailer; locally to the mail catcher.
+  SMTP_HOST: z.string().min(1).default('127.0.0.1'),
+  SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
+  SMTP_SECURE: z.enum(['true', 'false']).default('false'),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASSWORD: z.string().optional(),
+  MAIL_FROM: z.string().min(3).default('Strapsift <no-reply@strapsift.test>'),
 });
 
 export type Config = Omit<z.infer<typeof configSchema>, 'JWT_SECRET' | 'JWT_SECRET_FILE'> & {

@@ -1,0 +1,17 @@
+// s3rver ships no types; this covers the calls scripts/fakes makes.
+declare module 's3rver' {
+  interface S3rverOptions {
+    address?: string;
+    port?: number;
+    directory?: string;
+    silent?: boolean;
+    resetOnClose?: boolean;
+    allowMismatchedSignatures?: boolean;
+    configureBuckets?: { name: string; configs?: string[] }[];
+  }
+  export default class S3rver {
+    constructor(options: S3rverOptions);
+    run(): Promise<{ address: string; port: number }>;
+    close(): Promise<void>;
+  }
+}
