@@ -84,7 +84,7 @@ describe('the strap sheet editor', () => {
     fireEvent.click(screen.getByTestId('strap-save-2'));
     expect(onSave).not.toHaveBeenCalled();
     expect(screen.getByText('Swapped in must be a whole number')).toBeTruthy();
-    expect(screen.getByText('Short or over from the bank must be at least −100')).toBeTruthy();
+    expect(screen.getByText('Short or over must be at least −100')).toBeTruthy();
     expect((screen.getByTestId('strap-swapped-2') as HTMLInputElement).value).toBe('2.5');
   });
 
@@ -104,8 +104,8 @@ describe('the strap sheet editor', () => {
   it('when the steppers are pressed, then short/over keeps its sign and swapped in never goes below zero', () => {
     render(<StrapSheetEditor sheet={sheet} onSave={vi.fn()} canEdit wide={false} />);
     fireEvent.click(screen.getByLabelText('Edit strap 3'));
-    fireEvent.click(screen.getByLabelText('Short or over from the bank: one less'));
-    fireEvent.click(screen.getByLabelText('Short or over from the bank: one less'));
+    fireEvent.click(screen.getByLabelText('Short or over: one less'));
+    fireEvent.click(screen.getByLabelText('Short or over: one less'));
     expect((screen.getByTestId('strap-short-over-3') as HTMLInputElement).value).toBe('−2');
     fireEvent.click(screen.getByLabelText('Swapped in: one less'));
     expect((screen.getByTestId('strap-swapped-3') as HTMLInputElement).value).toBe('0');

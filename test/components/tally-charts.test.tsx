@@ -5,8 +5,8 @@ import { expectedHits, PATTERN_IDS, PATTERN_NAMES, EXPECTED_CAVEAT, type Pattern
 import type { TallyPatternRow } from '@shared/contracts';
 import { ChanceSection, chanceSummary } from '../../src/features/tally/components/chance-section';
 import { RateSection, rateSummary, type RateRow } from '../../src/features/tally/components/rate-section';
-import { formatChance, formatExpected, formatRate, verdict } from '../../src/features/tally/format';
-import { bucketLabel, parseCustomPeriod, presetFrom } from '../../src/features/tally/period';
+import { formatChance, formatExpected, formatRate, luck, verdict } from '../../src/features/tally/format';
+import { bucketLabel, fillBuckets, parseCustomPeriod, presetFrom } from '../../src/features/tally/period';
 
 // react-native-svg's CommonJS build requires react-native itself, which Node cannot load outside
 // Metro, and the components project does not inline it. The charts' own geometry is what these tests
@@ -50,11 +50,14 @@ describe('the per-pattern chart against chance', () => {
     expect(cells[2]).toBe('7.5');
     expect(cells[3]).toBe('27.8');
     // P(X ≥ 30) for a Poisson mean of 27.82 is 0.3644 (Python's math module): about chance.
-    expect(cells[4]).toBe('36%about chance');
+    expect(cells[4]).toBe('36%at least 30: about chance');
     const binary = rows.find((row) => row.textContent?.startsWith('binary'))!;
+    // Radar: none found where 0.4 are expected is unremarkable, so no chance is shown.
+    const radar = rows.find((row) => row.textContent?.startsWith('radar'))!;
+    expect(within(radar).getAllByRole('cell').map((cell) => cell.textContent).slice(3)).toEqual(['0.4', '—about chance']);
     // Four binaries where 4000 × 11,430 / 99,999,999 = 0.4572 are expected: P(X ≥ 4) = 1 − Σ₀³ e^−λ λ^k / k!
     // = 0.0012665 (worked in Python's math module), 1 in 790.
-    expect(within(binary).getAllByRole('cell').map((cell) => cell.textContent)).toEqual(['binary', '4', '1', '0.46', '1 in 790more than chance']);
+    expect(within(binary).getAllByRole('cell').map((cell) => cell.textContent)).toEqual(['binary', '4', '1', '0.46', '1 in 790at least 4: more than chance']);
   });
 
   it('when shown, then the drawing is summed up in words and the caveat about sequential straps is there', () => {
@@ -118,22 +121,32 @@ describe('the hits-per-1,000 bar chart', () => {
 
 describe('tally numbers', () => {
   it('formats chances, expected counts and rates for reading', () => {
-    expect([formatChance(0.9999), formatChance(0.3234), formatChance(0.041), formatChance(0.0008), formatChance(1e-12)]).toEqual([
+    expect([formatChance(0.9999), formatChance(0.3234), formatChance(0.041), formatChance(0.0008), formatChance(1 / 517_909_616), formatChance(1e-12)]).toEqual([
       '100%',
       '32%',
       '4.1%',
       '1 in 1,250',
+      '1 in 518 million',
       'under 1 in a billion',
     ]);
     expect([formatExpected(0), formatExpected(0.00000036), formatExpected(0.000361), formatExpected(0.4572), formatExpected(27.82), formatExpected(1234.5)]).toEqual([
       '0',
-      '< 0.0001',
+      '<\u00a00.0001',
       '0.00036',
       '0.46',
       '27.8',
       '1,235',
     ]);
     expect(formatRate(7.254)).toBe('7.25');
+  });
+
+  it('gives the chance by luck in the direction of the miss', () => {
+    expect(luck(4, 0.4572, 0.0012665)).toEqual({ p: 0.0012665, direction: 'at least' });
+    // One trinary where 9.7 are expected: P(X ≤ 1) = e^−9.7 (1 + 9.7) = 0.000656 (Python's math module).
+    const low = luck(1, 9.7, 1)!;
+    expect(low.direction).toBe('at most');
+    expect(low.p).toBeCloseTo(0.0006557, 6);
+    expect(luck(0, 0.00013, 1)).toBeNull();
   });
 
   it('calls a count lucky or thin only when chance makes it unlikely', () => {
@@ -153,5 +166,17 @@ describe('tally numbers', () => {
     expect(bucketLabel('2026-03-02T00:00:00.000Z', 'week')).toBe('Mar 2');
     expect(bucketLabel('2026-03-01T00:00:00.000Z', 'month')).toBe('Mar 2026');
     expect(bucketLabel('2026-03-01T00:00:00.000Z', 'month', true)).toBe('Mar 26');
+  });
+
+  it('keeps empty weeks and months as gaps between buckets with notes', () => {
+    const weeks = fillBuckets([{ start: '2026-09-28T00:00:00.000Z' }, { start: '2026-10-12T00:00:00.000Z' }], 'week');
+    expect(weeks).toEqual([
+      { start: '2026-09-28T00:00:00.000Z' },
+      { start: '2026-10-05T00:00:00.000Z', empty: true },
+      { start: '2026-10-12T00:00:00.000Z' },
+    ]);
+    const months = fillBuckets([{ start: '2026-11-01T00:00:00.000Z' }, { start: '2027-02-01T00:00:00.000Z' }], 'month');
+    expect(months.map((row) => row.start.slice(0, 7))).toEqual(['2026-11', '2026-12', '2027-01', '2027-02']);
+    expect(fillBuckets([], 'week')).toEqual([]);
   });
 });

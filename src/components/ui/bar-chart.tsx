@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { StyleSheet, View, type LayoutChangeEvent } from 'react-native';
 import Svg, { Line, Rect, Text as SvgText } from 'react-native-svg';
 import { useTheme } from '../../theme/theme-provider';
-import { fontSize } from '../../theme/tokens';
+import { fonts, fontSize } from '../../theme/tokens';
 
 export interface BarDatum {
   key: string;
@@ -24,7 +24,8 @@ interface BarChartProps {
 
 const AXIS = 44;
 const LABEL_ROOM = 22;
-const TOP = 14;
+// Room above the plot for the reference line's key, so it never sits on a bar.
+const TOP = 24;
 
 /**
  * Vertical bars in the theme's colours. The drawing is hidden from screen readers; the summary
@@ -53,13 +54,13 @@ export function BarChart({ data, summary, formatValue, reference, height = 180, 
     <View onLayout={onLayout} role="img" aria-label={summary} testID={testID} style={styles.wrap}>
       <Svg width={width} height={height} accessibilityElementsHidden importantForAccessibility="no-hide-descendants">
         <Line x1={AXIS} x2={width} y1={y(0)} y2={y(0)} stroke={theme.line} strokeWidth={1} />
-        <SvgText x={AXIS - 6} y={y(0)} fill={theme.inkFaint} fontSize={fontSize.xs} textAnchor="end">
+        <SvgText x={AXIS - 6} y={y(0)} fill={theme.inkFaint} fontSize={fontSize.xs} fontFamily={fonts.mono} textAnchor="end">
           0
         </SvgText>
         {top > 0 ? (
           <>
             <Line x1={AXIS} x2={width} y1={y(top)} y2={y(top)} stroke={theme.line} strokeWidth={1} strokeDasharray="2 4" />
-            <SvgText x={AXIS - 6} y={y(top) + 4} fill={theme.inkFaint} fontSize={fontSize.xs} textAnchor="end">
+            <SvgText x={AXIS - 6} y={y(top) + 4} fill={theme.inkFaint} fontSize={fontSize.xs} fontFamily={fonts.mono} textAnchor="end">
               {formatValue(top)}
             </SvgText>
           </>
@@ -87,6 +88,7 @@ export function BarChart({ data, summary, formatValue, reference, height = 180, 
               y={height - 6}
               fill={theme.inkMuted}
               fontSize={fontSize.xs}
+              fontFamily={fonts.mono}
               textAnchor="middle"
             >
               {datum.label}
@@ -104,7 +106,8 @@ export function BarChart({ data, summary, formatValue, reference, height = 180, 
               strokeWidth={1.5}
               strokeDasharray="6 4"
             />
-            <SvgText x={width - 4} y={y(reference.value) - 4} fill={theme.hit} fontSize={fontSize.xs} textAnchor="end">
+            <Line x1={width - 150} x2={width - 126} y1={8} y2={8} stroke={theme.hit} strokeWidth={1.5} strokeDasharray="6 4" />
+            <SvgText x={width - 120} y={12} fill={theme.hit} fontSize={fontSize.xs} fontFamily={fonts.mono} textAnchor="start">
               {reference.label}
             </SvgText>
           </>

@@ -32,13 +32,20 @@ export function PairedBars({ data, summary, formatValue, actualLabel = 'found', 
   return (
     <View role="img" aria-label={summary} testID={testID} style={styles.wrap}>
       <View style={styles.legend} accessibilityElementsHidden importantForAccessibility="no-hide-descendants">
-        <View style={[styles.swatch, { backgroundColor: theme.hit }]} />
-        <Text variant="caption" tone="muted">
-          {actualLabel}
-        </Text>
-        <View style={[styles.swatch, { backgroundColor: theme.nearSoft, borderColor: theme.near, borderWidth: 1 }]} />
-        <Text variant="caption" tone="muted">
-          {expectedLabel} by chance · each row drawn to its own scale
+        <View style={styles.key}>
+          <View style={[styles.swatch, { backgroundColor: theme.hit }]} />
+          <Text variant="caption" tone="muted">
+            {actualLabel}
+          </Text>
+        </View>
+        <View style={styles.key}>
+          <View style={[styles.swatch, { backgroundColor: theme.nearSoft, borderColor: theme.near, borderWidth: 1 }]} />
+          <Text variant="caption" tone="muted">
+            {expectedLabel} by chance
+          </Text>
+        </View>
+        <Text variant="caption" tone="faint">
+          each row drawn to its own scale
         </Text>
       </View>
       {data.map((datum) => {
@@ -75,7 +82,8 @@ export function PairedBars({ data, summary, formatValue, actualLabel = 'found', 
 
 const styles = StyleSheet.create({
   wrap: { gap: space.xs },
-  legend: { flexDirection: 'row', alignItems: 'center', gap: space.xs, flexWrap: 'wrap', marginBottom: space.xs },
+  legend: { flexDirection: 'row', alignItems: 'center', columnGap: space.md, rowGap: space.xxs, flexWrap: 'wrap', marginBottom: space.xs },
+  key: { flexDirection: 'row', alignItems: 'center', gap: space.xs },
   swatch: { width: 12, height: 12, borderRadius: radius.sm / 2 },
   row: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
   label: { width: 96 },

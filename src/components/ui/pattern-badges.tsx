@@ -16,5 +16,6 @@ export function PatternBadges({ patterns, star, testID }: { patterns: readonly P
 }
 
 const styles = StyleSheet.create({
-  row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
+  // Shrinks inside a table cell or a row, so a third badge wraps instead of spilling over its neighbour.
+  row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs, flexShrink: 1, minWidth: 0 },
 });

@@ -14,7 +14,8 @@ export function formatRate(perThousand: number): string {
  */
 export function formatExpected(value: number): string {
   if (value === 0) return '0';
-  if (value < 0.0001) return '< 0.0001';
+  // A no-break space keeps the sign and the figure on one line in a narrow cell.
+  if (value < 0.0001) return '<\u00a00.0001';
   if (value >= 100) return formatCount(value);
   if (value >= 1) return value.toLocaleString('en-US', { maximumFractionDigits: 1 });
   return value.toLocaleString('en-US', { maximumSignificantDigits: 2 });
@@ -28,7 +29,25 @@ export function formatChance(p: number): string {
   if (p >= 0.01) return `${(p * 100).toLocaleString('en-US', { maximumFractionDigits: 1 })}%`;
   if (p <= 0) return '0';
   const oneIn = 1 / p;
-  return oneIn >= 1e9 ? 'under 1 in a billion' : `1 in ${formatCount(oneIn)}`;
+  if (oneIn >= 1e9) return 'under 1 in a billion';
+  // Past a million the exact figure is noise; millions read at a glance and fit a table cell.
+  if (oneIn >= 1e6) return `1 in ${(oneIn / 1e6).toLocaleString('en-US', { maximumFractionDigits: 0 })} million`;
+  return `1 in ${formatCount(oneIn)}`;
+}
+
+/**
+ * The chance by luck alone of a count at least this far from the expected one, in its direction:
+ * P(X ≥ hits) above the expected count, P(X ≤ hits) below it. Null when nothing was found and chance
+ * expected next to nothing, where a "100%" would only be noise.
+ *
+ * @example
+ * luck(4, 0.4572, 0.0012665) // { p: 0.0012665, direction: 'at least' }
+ */
+export function luck(hits: number, expected: number, pAtLeast: number): { p: number; direction: 'at least' | 'at most' } | null {
+  if (hits >= expected) return hits === 0 ? null : { p: pAtLeast, direction: 'at least' };
+  const atMost = 1 - poissonTail(hits + 1, expected);
+  if (hits === 0 && atMost >= 0.5) return null;
+  return { p: atMost, direction: 'at most' };
 }
 
 export type Verdict = 'lucky' | 'thin' | 'chance';

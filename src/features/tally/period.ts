@@ -45,3 +45,26 @@ export function bucketLabel(iso: string, bucket: 'week' | 'month', short = false
   }
   return date.toLocaleDateString('en-US', { month: 'short', day: 'numeric', timeZone: 'UTC' });
 }
+
+/** The start of the bucket after `iso`: a week (7 days) or a calendar month later, in UTC. */
+export function nextBucket(iso: string, bucket: 'week' | 'month'): string {
+  const date = new Date(iso);
+  if (bucket === 'week') return new Date(date.getTime() + 7 * 24 * 60 * 60 * 1000).toISOString();
+  return new Date(Date.UTC(date.getUTCFullYear(), date.getUTCMonth() + 1, 1)).toISOString();
+}
+
+/**
+ * Every bucket from the first to the last one with notes, the empty ones included, so a chart over
+ * time keeps its spacing: a month with no hunting shows as a gap, not as the next month moved up.
+ * The server sends only buckets with notes. Stops after `max` buckets.
+ */
+export function fillBuckets<T extends { start: string }>(rows: readonly T[], bucket: 'week' | 'month', max = 520): Array<T | { start: string; empty: true }> {
+  if (rows.length === 0) return [];
+  const byStart = new Map(rows.map((row) => [new Date(row.start).getTime(), row]));
+  const last = new Date(rows[rows.length - 1]!.start).getTime();
+  const filled: Array<T | { start: string; empty: true }> = [];
+  for (let at = rows[0]!.start; new Date(at).getTime() <= last && filled.length < max; at = nextBucket(at, bucket)) {
+    filled.push(byStart.get(new Date(at).getTime()) ?? { start: at, empty: true });
+  }
+  return filled;
+}

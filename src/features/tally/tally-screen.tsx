@@ -15,7 +15,7 @@ import { usePeriodTally, type PeriodQuery } from './api';
 import { ChanceSection } from './components/chance-section';
 import { RateSection, type RateRow } from './components/rate-section';
 import { formatCount, formatDate, formatRate, formatShortDate } from './format';
-import { PERIOD_CHOICES, bucketLabel, parseCustomPeriod, presetFrom, type PeriodChoice } from './period';
+import { PERIOD_CHOICES, bucketLabel, fillBuckets, parseCustomPeriod, presetFrom, type PeriodChoice } from './period';
 
 const BUCKETS = [
   { value: 'week', label: 'By week' },
@@ -68,7 +68,8 @@ export function TallyScreen() {
   const byHunt: RateRow[] = (data?.byHunt ?? []).map((row) => ({
     key: row.huntId,
     label: formatShortDate(row.startedAt),
-    name: `${row.title} (${formatDate(row.startedAt)})`,
+    name: row.title,
+    detail: formatDate(row.startedAt),
     notes: row.notes,
     hits: row.hits,
     perThousand: row.perThousand,
@@ -80,6 +81,13 @@ export function TallyScreen() {
     notes: row.notes,
     hits: row.hits,
     perThousand: row.perThousand,
+  }));
+
+  // The chart keeps weeks or months without notes as gaps; the table lists only those with notes.
+  const overTimeBars = fillBuckets(data?.overTime ?? [], bucket).map((row) => ({
+    key: row.start,
+    label: bucketLabel(row.start, bucket, true),
+    value: 'empty' in row ? 0 : row.perThousand,
   }));
 
   return (
@@ -148,6 +156,7 @@ export function TallyScreen() {
               what={bucket === 'week' ? 'weeks' : 'months'}
               firstHeader={bucket === 'week' ? 'Week' : 'Month'}
               rows={overTime}
+              chartData={overTimeBars}
               average={data.perThousand}
               wide={isWide}
               testID="tally-over-time"

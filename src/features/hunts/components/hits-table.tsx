@@ -69,17 +69,32 @@ export function HitsTable({ hits, wide, showLoggedBy }: HitsTableProps) {
     {
       key: 'serial',
       header: 'Serial',
-      flex: 1.6,
-      cell: (scan) => <Text style={[styles.serial, { color: theme.hit }]}>{serialText(scan)}</Text>,
+      width: 164,
+      cell: (scan) => (
+        <Text style={[styles.serial, { color: theme.hit }]} numberOfLines={1}>
+          {serialText(scan)}
+        </Text>
+      ),
     },
     { key: 'patterns', header: 'Patterns', flex: 2.2, cell: (scan) => <PatternBadges patterns={scan.patterns} /> },
-    { key: 'points', header: 'Points', align: 'right', width: 80, cell: (scan) => <Text variant="mono">{scan.points.toFixed(1)}</Text> },
+    { key: 'points', header: 'Points', align: 'right', width: 72, cell: (scan) => <Text variant="mono">{scan.points.toFixed(1)}</Text> },
     { key: 'strap', header: 'Strap', align: 'right', width: 64, cell: (scan) => scan.strap },
     { key: 'fate', header: 'Kept', width: 90, cell: (scan) => <Fate scan={scan} /> },
     ...(showLoggedBy
-      ? [{ key: 'by', header: 'Logged by', flex: 1.2, cell: (scan: ScanView) => scan.loggedBy.displayName }]
+      ? [
+          {
+            key: 'by',
+            header: 'Logged by',
+            flex: 1.2,
+            cell: (scan: ScanView) => (
+              <Text variant="caption" numberOfLines={1}>
+                {scan.loggedBy.displayName}
+              </Text>
+            ),
+          },
+        ]
       : []),
-    { key: 'when', header: 'When', flex: 1.3, cell: (scan) => <Text variant="caption" tone="muted">{when(scan.scannedAt)}</Text> },
+    { key: 'when', header: 'When', width: 124, cell: (scan) => <Text variant="caption" tone="muted">{when(scan.scannedAt)}</Text> },
   ];
   return (
     <DataTable

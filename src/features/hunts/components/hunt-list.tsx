@@ -41,9 +41,8 @@ export function HuntCards({ hunts, onOpen }: { hunts: readonly HuntSummary[]; on
   return (
     <View role="list" aria-label="Hunts" style={styles.cards} testID="hunt-cards">
       {hunts.map((hunt) => (
+        <View key={hunt.id} role="listitem">
         <Pressable
-          key={hunt.id}
-          role="listitem"
           accessibilityRole="button"
           accessibilityLabel={`Open hunt ${hunt.title}, ${formatCount(hunt.notesSearched)} notes, ${hunt.hits} hits`}
           onPress={() => onOpen(hunt.id)}
@@ -80,6 +79,7 @@ export function HuntCards({ hunts, onOpen }: { hunts: readonly HuntSummary[]; on
           </View>
           <BestFind hunt={hunt} />
         </Pressable>
+        </View>
       ))}
     </View>
   );
@@ -104,7 +104,7 @@ export function HuntTable({ hunts, onOpen }: { hunts: readonly HuntSummary[]; on
         </View>
       ),
     },
-    { key: 'notes', header: 'Notes searched', align: 'right', cell: (hunt) => hunt.notesSearched },
+    { key: 'notes', header: 'Notes searched', align: 'right', width: 130, cell: (hunt) => hunt.notesSearched },
     {
       key: 'hits',
       header: 'Hits',
@@ -144,7 +144,8 @@ const styles = StyleSheet.create({
   cardHead: { flexDirection: 'row', gap: space.sm, alignItems: 'flex-start' },
   grow: { flex: 1, minWidth: 0 },
   figures: { flexDirection: 'row', gap: space.lg, flexWrap: 'wrap' },
-  best: { flexDirection: 'row', alignItems: 'center', gap: space.sm, flexWrap: 'wrap' },
+  // Shrinks inside its table cell so the badges wrap instead of running into the next column.
+  best: { flexDirection: 'row', alignItems: 'center', gap: space.sm, flexWrap: 'wrap', flexShrink: 1, minWidth: 0 },
   serial: { fontFamily: fonts.monoMedium, fontSize: 15, fontVariant: ['tabular-nums'] },
   status: { flexDirection: 'row', gap: space.xs, flexWrap: 'wrap' },
 });

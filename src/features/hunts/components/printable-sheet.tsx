@@ -14,8 +14,8 @@ function StrapTable({ rows }: { rows: StrapRow[] }) {
   return (
     <View style={styles.table} role="table" aria-label="Straps returned">
       <View style={[styles.row, styles.head]} role="row">
-        {['Strap', 'Received', 'Pulled', 'Swapped in', 'Goes back', ''].map((header, index) => (
-          <Text key={header || index} role="columnheader" style={[styles.cell, styles.headText, index === 0 ? styles.first : null]}>
+        {['Strap', 'Received', 'Pulled', 'Swapped in', 'Goes back', 'Complete'].map((header, index) => (
+          <Text key={header} role="columnheader" style={[styles.cell, styles.headText, index === 0 ? styles.first : null]}>
             {header}
           </Text>
         ))}
@@ -37,7 +37,7 @@ function StrapTable({ rows }: { rows: StrapRow[] }) {
           <Text role="cell" style={[styles.cell, styles.bold]}>
             {row.notesBack}
           </Text>
-          <Text role="cell" style={styles.cell}>
+          <Text role="cell" style={[styles.cell, styles.mark]}>
             {row.complete ? '✓' : row.notesBack < NOTES_PER_STRAP ? `${NOTES_PER_STRAP - row.notesBack} short` : `${row.notesBack - NOTES_PER_STRAP} over`}
           </Text>
         </View>
@@ -107,7 +107,8 @@ const styles = StyleSheet.create({
   head: { borderBottomColor: INK },
   cell: { flex: 1, color: INK, fontSize: 11, fontFamily: fonts.mono, textAlign: 'right', paddingHorizontal: 4, paddingVertical: 2 },
   first: { textAlign: 'left' },
-  headText: { fontFamily: undefined, fontWeight: '700', fontSize: 10 },
+  headText: { fontFamily: fonts.body, fontWeight: '700', fontSize: 10 },
+  mark: { fontFamily: fonts.body },
   bold: { fontWeight: '700' },
   totals: { color: INK, fontSize: 12, fontWeight: '700', marginTop: 4 },
   signatures: { flexDirection: 'row', gap: 32, marginTop: 28 },

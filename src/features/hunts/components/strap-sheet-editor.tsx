@@ -47,7 +47,7 @@ function StateBadge({ row }: { row: StrapRow }) {
 
 function Searched({ row }: { row: StrapRow }) {
   return (
-    <Text variant="mono" tone={row.fullySearched || row.searched === 0 ? 'ink' : 'muted'}>
+    <Text variant="mono" tone={row.fullySearched || row.searched === 0 ? 'ink' : 'muted'} numberOfLines={1}>
       {row.searched}
       <Text variant="caption" tone="faint">
         {' '}
@@ -139,11 +139,11 @@ function StrapForm({
           testID={`strap-swapped-${n}`}
         />
         <Stepper
-          label="Short or over from the bank"
+          label="Short or over"
           value={editing.draft.shortOver}
           onChange={(shortOver) => setDraft({ shortOver })}
           error={editing.errors.shortOver}
-          hint="−1 if it came one short, +1 if one over"
+          hint="As it came from the bank: −1 one short, +1 one over"
           allowNegative
           testID={`strap-short-over-${n}`}
         />
@@ -244,14 +244,15 @@ export function StrapSheetEditor({ sheet, onSave, canEdit, wide }: StrapSheetEdi
 
   const columns: Column<StrapRow>[] = [
     { key: 'number', header: 'Strap', width: 64, cell: (row) => <Text bold>{row.number}</Text> },
-    { key: 'searched', header: 'Searched', align: 'right', cell: (row) => <Searched row={row} /> },
-    { key: 'pulled', header: 'Pulled', align: 'right', cell: (row) => row.pulled },
-    { key: 'swapped', header: 'Swapped in', align: 'right', cell: (row) => row.swappedIn },
-    { key: 'shortOver', header: 'Short/over', align: 'right', cell: (row) => <Text variant="mono">{signed(row.shortOver)}</Text> },
+    { key: 'searched', header: 'Searched', align: 'right', width: 104, cell: (row) => <Searched row={row} /> },
+    { key: 'pulled', header: 'Pulled', align: 'right', width: 72, cell: (row) => row.pulled },
+    { key: 'swapped', header: 'Swapped in', align: 'right', width: 100, cell: (row) => row.swappedIn },
+    { key: 'shortOver', header: 'Short/over', align: 'right', width: 96, cell: (row) => <Text variant="mono">{signed(row.shortOver)}</Text> },
     {
       key: 'back',
       header: 'Goes back',
       align: 'right',
+      width: 96,
       cell: (row) => (
         <Text variant="mono" bold testID={`strap-back-${row.number}`}>
           {row.notesBack}
@@ -286,8 +287,17 @@ export function StrapSheetEditor({ sheet, onSave, canEdit, wide }: StrapSheetEdi
             >
               <View style={styles.cardHead}>
                 <Text bold>Strap {row.number}</Text>
-                <StateBadge row={row} />
+                {/* The badge sits at its row's top by default; here it centres with the title and the button. */}
+                <View>
+                  <StateBadge row={row} />
+                </View>
                 <View style={styles.grow} />
+                <Text variant="caption" tone="muted">
+                  back{' '}
+                  <Text variant="mono" bold testID={`strap-back-${row.number}`}>
+                    {row.notesBack}
+                  </Text>
+                </Text>
                 {editButton(row)}
               </View>
               <View style={styles.cardFigures}>
@@ -302,12 +312,6 @@ export function StrapSheetEditor({ sheet, onSave, canEdit, wide }: StrapSheetEdi
                 </Text>
                 <Text variant="caption" tone="muted">
                   ± <Text variant="mono">{signed(row.shortOver)}</Text>
-                </Text>
-                <Text variant="caption" tone="muted">
-                  back{' '}
-                  <Text variant="mono" bold testID={`strap-back-${row.number}`}>
-                    {row.notesBack}
-                  </Text>
                 </Text>
               </View>
               {row.note ? (

@@ -5,7 +5,7 @@ import { Notice } from '@/components/ui/notice';
 import { PairedBars } from '@/components/ui/paired-bars';
 import { Text } from '@/components/ui/text';
 import { space } from '@/theme/tokens';
-import { formatChance, formatCount, formatExpected, formatRate, verdict, VERDICT_TEXT } from '../format';
+import { formatChance, formatCount, formatExpected, formatRate, luck, verdict, VERDICT_TEXT } from '../format';
 
 export interface ChanceFigures {
   notes: number;
@@ -13,12 +13,20 @@ export interface ChanceFigures {
   caveat: string;
 }
 
-function VerdictLine({ row }: { row: TallyPatternRow }) {
+/** The chance by luck of a count this far out, and in words whether it stands out. */
+function LuckCell({ row }: { row: TallyPatternRow }) {
   const v = verdict(row.hits, row.expected, row.pAtLeast);
+  const chance = luck(row.hits, row.expected, row.pAtLeast);
   return (
-    <Text variant="caption" tone={v === 'lucky' ? 'hit' : v === 'thin' ? 'warn' : 'faint'}>
-      {VERDICT_TEXT[v]}
-    </Text>
+    <View style={styles.stackRight}>
+      <Text variant="mono" style={styles.luck}>
+        {chance ? formatChance(chance.p) : '—'}
+      </Text>
+      <Text variant="caption" tone={v === 'lucky' ? 'hit' : v === 'thin' ? 'warn' : 'faint'} style={styles.rightText}>
+        {chance ? `${chance.direction} ${formatCount(row.hits)}: ` : ''}
+        {VERDICT_TEXT[v]}
+      </Text>
+    </View>
   );
 }
 
@@ -34,53 +42,44 @@ export function chanceSummary(figures: ChanceFigures): string {
 }
 
 const wideColumns: Column<TallyPatternRow>[] = [
-  { key: 'name', header: 'Pattern', flex: 1.4, cell: (row) => row.name },
+  { key: 'name', header: 'Pattern', flex: 1.3, cell: (row) => row.name },
   { key: 'hits', header: 'Found', align: 'right', cell: (row) => row.hits },
   { key: 'rate', header: 'Per 1,000', align: 'right', cell: (row) => <Text variant="mono">{formatRate(row.perThousand)}</Text> },
   { key: 'expected', header: 'Expected', align: 'right', cell: (row) => <Text variant="mono">{formatExpected(row.expected)}</Text> },
-  {
-    key: 'chance',
-    header: 'Chance of this many',
-    flex: 1.6,
-    align: 'right',
-    cell: (row) => (
-      <View style={styles.stackRight}>
-        <Text variant="mono">{row.hits === 0 ? '—' : formatChance(row.pAtLeast)}</Text>
-        <VerdictLine row={row} />
-      </View>
-    ),
-  },
+  { key: 'chance', header: 'Chance by luck', flex: 2, align: 'right', cell: (row) => <LuckCell row={row} /> },
 ];
 
-// A phone has room for four columns: the rate rides under the count.
+// A phone has room for four narrow columns: the rate rides under the count, figures a size smaller.
 const compactColumns: Column<TallyPatternRow>[] = [
-  { key: 'name', header: 'Pattern', flex: 1.2, cell: (row) => row.name },
+  { key: 'name', header: 'Pattern', flex: 1.1, cell: (row) => <Text variant="caption">{row.name}</Text> },
   {
     key: 'hits',
     header: 'Found',
     align: 'right',
+    flex: 0.8,
     cell: (row) => (
       <View style={styles.stackRight}>
-        <Text variant="mono">{formatCount(row.hits)}</Text>
+        <Text variant="mono" style={styles.small}>
+          {formatCount(row.hits)}
+        </Text>
         <Text variant="caption" tone="faint">
           {formatRate(row.perThousand)}/1k
         </Text>
       </View>
     ),
   },
-  { key: 'expected', header: 'Expected', align: 'right', cell: (row) => <Text variant="mono">{formatExpected(row.expected)}</Text> },
   {
-    key: 'chance',
-    header: 'Chance',
-    flex: 1.2,
+    key: 'expected',
+    header: 'Expected',
     align: 'right',
+    flex: 1.1,
     cell: (row) => (
-      <View style={styles.stackRight}>
-        <Text variant="mono">{row.hits === 0 ? '—' : formatChance(row.pAtLeast)}</Text>
-        <VerdictLine row={row} />
-      </View>
+      <Text variant="mono" style={[styles.small, styles.rightText]}>
+        {formatExpected(row.expected)}
+      </Text>
     ),
   },
+  { key: 'chance', header: 'By luck', flex: 1.6, align: 'right', cell: (row) => <LuckCell row={row} /> },
 ];
 
 /**
@@ -113,7 +112,8 @@ export function ChanceSection({ figures, wide, testID }: { figures: ChanceFigure
         </View>
       </View>
       <Text variant="caption" tone="faint">
-        Chance of this many: the Poisson probability of finding at least this many by luck alone, with the expected count as its mean.
+        Chance by luck: the Poisson probability, with the expected count as its mean, of finding at least this many (or, below the
+        expected count, at most this many) by luck alone.
       </Text>
       <Notice tone="info" title="Sequential notes are not independent draws">
         {figures.caveat}
@@ -128,5 +128,8 @@ const styles = StyleSheet.create({
   stacked: { gap: space.lg },
   chartWide: { flex: 1, minWidth: 0 },
   tableWide: { flex: 1.3, minWidth: 0 },
-  stackRight: { alignItems: 'flex-end' },
+  stackRight: { alignItems: 'flex-end', flexShrink: 1, minWidth: 0 },
+  luck: { fontSize: 14, textAlign: 'right' },
+  small: { fontSize: 13 },
+  rightText: { textAlign: 'right' },
 });

@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import { BarChart } from '@/components/ui/bar-chart';
+import { BarChart, type BarDatum } from '@/components/ui/bar-chart';
 import { DataTable, type Column } from '@/components/ui/data-table';
 import { Text } from '@/components/ui/text';
 import { space } from '@/theme/tokens';
@@ -11,6 +11,8 @@ export interface RateRow {
   label: string;
   /** In the table: the whole name. */
   name: string;
+  /** A second, quieter line under the name (a hunt's date). */
+  detail?: string;
   notes: number;
   hits: number;
   perThousand: number;
@@ -34,23 +36,45 @@ interface RateSectionProps {
   rows: readonly RateRow[];
   average: number;
   wide: boolean;
+  /** Bars to draw when they differ from the rows, e.g. with empty weeks kept as gaps. */
+  chartData?: readonly BarDatum[];
   testID?: string;
 }
 
 /** Hits per 1,000 notes as bars, with the average as a dashed line, and the same numbers in a table. */
-export function RateSection({ what, firstHeader, rows, average, wide, testID }: RateSectionProps) {
+export function RateSection({ what, firstHeader, rows, average, wide, chartData, testID }: RateSectionProps) {
   if (rows.length === 0) return <Text tone="muted">No notes in this period.</Text>;
   const columns: Column<RateRow>[] = [
-    { key: 'name', header: firstHeader, flex: 2, cell: (row) => row.name },
-    { key: 'notes', header: 'Notes', align: 'right', cell: (row) => row.notes },
-    { key: 'hits', header: 'Hits', align: 'right', cell: (row) => row.hits },
-    { key: 'rate', header: 'Per 1,000', align: 'right', cell: (row) => <Text variant="mono">{formatRate(row.perThousand)}</Text> },
+    {
+      key: 'name',
+      header: firstHeader,
+      flex: 2.2,
+      cell: (row) => (
+        <View style={styles.name}>
+          <Text>{row.name}</Text>
+          {row.detail ? (
+            <Text variant="caption" tone="muted">
+              {row.detail}
+            </Text>
+          ) : null}
+        </View>
+      ),
+    },
+    { key: 'notes', header: 'Notes', align: 'right', cell: (row) => <Text variant="mono" style={wide ? null : styles.small}>{formatCount(row.notes)}</Text> },
+    { key: 'hits', header: 'Hits', align: 'right', flex: 0.7, cell: (row) => <Text variant="mono" style={wide ? null : styles.small}>{formatCount(row.hits)}</Text> },
+    {
+      key: 'rate',
+      header: wide ? 'Per 1,000' : 'Per 1k',
+      align: 'right',
+      flex: 1.1,
+      cell: (row) => <Text variant="mono" style={wide ? null : styles.small}>{formatRate(row.perThousand)}</Text>,
+    },
   ];
   return (
     <View style={wide ? styles.sideBySide : styles.stacked} testID={testID}>
       <View style={wide ? styles.chart : null}>
         <BarChart
-          data={rows.map((row) => ({ key: row.key, label: row.label, value: row.perThousand }))}
+          data={chartData ?? rows.map((row) => ({ key: row.key, label: row.label, value: row.perThousand }))}
           summary={rateSummary(what, rows, average)}
           formatValue={formatRate}
           reference={{ value: average, label: `average ${formatRate(average)}` }}
@@ -75,4 +99,6 @@ const styles = StyleSheet.create({
   stacked: { gap: space.md },
   chart: { flex: 1.2, minWidth: 0 },
   table: { flex: 1, minWidth: 0 },
+  name: { flexShrink: 1, minWidth: 0 },
+  small: { fontSize: 14 },
 });
