@@ -93,6 +93,10 @@ describe.each([
       await expect(page.getByTestId('crew-list').textContent()).resolves.toContain('Tobiah Marsh');
       await expect(page.getByTestId('hits-table').textContent()).resolves.toContain('00000417');
       await shootWhole(page, `test-results/screenshots/hunt-page-${name}.png`);
+      // The same page in the dark theme (it follows the system's scheme by default).
+      await page.emulateMedia({ colorScheme: 'dark' });
+      await page.waitForTimeout(200);
+      await shootWhole(page, `test-results/screenshots/hunt-page-dark-${name}.png`);
     } finally {
       await browser.close();
     }

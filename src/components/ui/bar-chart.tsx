@@ -22,7 +22,8 @@ interface BarChartProps {
   testID?: string;
 }
 
-const AXIS = 44;
+// Wide enough for a top label such as "428.57" in the mono face.
+const AXIS = 60;
 const LABEL_ROOM = 22;
 // Room above the plot for the reference line's key, so it never sits on a bar.
 const TOP = 24;
