@@ -79,23 +79,37 @@ function memberValues(id: PatternId, r: Resolved): ArrayLike<number> & Iterable<
  * Every serial with any pattern is a member of some pattern's list, so
  * enumerating the lists and counting each serial only under the first pattern
  * it has (in PATTERN_IDS order) counts each exactly once; the rest of the
- * domain has no pattern at all.
+ * domain has no pattern at all. The 695,520 trinaries are not walked one by
+ * one: those with another pattern turn up in the other lists (the low and high
+ * bands come after trinary in the order, so there they are counted under
+ * trinary), and the trinaries with no other pattern are the total, known by
+ * combinatorics, less those.
  */
 function buildTable(r: Resolved): SignatureTable {
   const tally = new Float64Array(1024);
-  let withPatterns = 0;
+  const trinaryBit = 1 << PATTERN_ORDER.indexOf('trinary');
+  const beforeTrinary = trinaryBit - 1;
   for (let i = 0; i < PATTERN_ORDER.length; i++) {
+    const id = PATTERN_ORDER[i]!;
+    if (id === 'trinary') continue;
     const earlier = (1 << i) - 1;
-    const values = memberValues(PATTERN_ORDER[i]!, r);
+    const values = memberValues(id, r);
     for (let j = 0; j < values.length; j++) {
       const v = values[j]!;
       if (v > r.last) break;
       const mask = patternMask(v, r.lowLimit);
-      if ((mask & earlier) !== 0) continue;
-      tally[mask]++;
-      withPatterns++;
+      if ((mask & earlier) === 0) tally[mask]++;
+      else if (i > PATTERN_ORDER.indexOf('trinary') && (mask & trinaryBit) !== 0 && (mask & beforeTrinary) === 0) {
+        // A trinary in the low or high band whose first pattern is trinary: counted here, not in a trinary walk.
+        tally[mask]++;
+      }
     }
   }
+  let trinariesElsewhere = 0;
+  for (let mask = 0; mask < 1024; mask++) if (mask !== trinaryBit && (mask & trinaryBit) !== 0) trinariesElsewhere += tally[mask]!;
+  tally[trinaryBit] = patternCount('trinary', { lowLimit: r.lowLimit, domainLast: r.last }) - trinariesElsewhere;
+  let withPatterns = 0;
+  for (let mask = 1; mask < 1024; mask++) withPatterns += tally[mask]!;
   tally[0] = r.last - withPatterns;
   const exact = new Map<number, number>();
   for (let mask = 0; mask < 1024; mask++) if (tally[mask]! > 0) exact.set(mask, tally[mask]!);
