@@ -15,6 +15,7 @@ import {
   PATTERN_NAMES,
   describeNearMiss,
   isLowLimit,
+  parseSerial,
   parseWatchPattern,
   read,
   sweep,
@@ -221,10 +222,12 @@ async function readAll(cli: Cli, out: Output): Promise<void> {
 }
 
 async function runSweep(cli: Cli, out: Output): Promise<void> {
-  const { first, count } = cli.sweep!;
+  const { count } = cli.sweep!;
+  const parsed = parseSerial(cli.sweep!.first);
+  if (!parsed.ok) fail(`--sweep FIRST: ${parsed.error.message}`);
   let result;
   try {
-    result = sweep(first, count, cli.patterns ?? PATTERN_IDS, { lowLimit: cli.options.lowLimit ?? DEFAULT_WEIGHTS.lowLimit });
+    result = sweep(parsed.digits, count, cli.patterns ?? PATTERN_IDS, { lowLimit: cli.options.lowLimit ?? DEFAULT_WEIGHTS.lowLimit });
   } catch (error) {
     fail(`--sweep: ${(error as Error).message}`);
   }
