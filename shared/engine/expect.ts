@@ -30,7 +30,8 @@ export function poissonTail(k: number, mean: number): number {
  * exact probability over the domain) and, when actual counts are given, the
  * Poisson probability of seeing at least that many: small values mean a
  * lucky hunt (or a picked-over bank when actual is far below expected).
- * Carries EXPECTED_CAVEAT: sequential straps are not independent draws.
+ * Counts that are not whole numbers ≥ 0 are treated as not given. Carries
+ * EXPECTED_CAVEAT: sequential straps are not independent draws.
  *
  * @example
  * expectedHits(10_000, { binary: 3 }).rows.find((r) => r.id === 'binary')

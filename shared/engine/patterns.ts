@@ -127,7 +127,8 @@ export function patternMask(value: number, lowLimit: number = DEFAULT_LOW_LIMIT)
 
 /**
  * The patterns a serial has, in PATTERN_IDS order. Throws RangeError when the
- * input is not 8 digits / a number 1…99,999,999 (user text goes through `read`).
+ * input is not 8 digits / a number 1…99,999,999 (user text goes through `read`)
+ * or the low limit is not one of 9, 99, 999, 9999, 99999.
  *
  * @example
  * classify('12121212') // ['repeater', 'super-repeater', 'binary']
@@ -136,7 +137,13 @@ export function patternMask(value: number, lowLimit: number = DEFAULT_LOW_LIMIT)
  */
 export function classify(digits: SerialInput, options: { lowLimit?: LowLimit } = {}): PatternId[] {
   const value = serialValue(digits, 'classify');
-  return maskToIds(patternMask(value, options.lowLimit ?? DEFAULT_LOW_LIMIT));
+  return maskToIds(patternMask(value, lowLimitOption(options.lowLimit, 'classify')));
+}
+
+function lowLimitOption(lowLimit: unknown, fn: string): LowLimit {
+  if (lowLimit === undefined) return DEFAULT_LOW_LIMIT;
+  if (!isLowLimit(lowLimit)) throw new RangeError(`${fn}: lowLimit must be 9, 99, 999, 9999 or 99999, got ${String(lowLimit)}`);
+  return lowLimit;
 }
 
 /**
@@ -149,5 +156,5 @@ export function hasPattern(digits: SerialInput, pattern: PatternId, options: { l
   const value = serialValue(digits, 'hasPattern');
   const bit = BIT[pattern];
   if (bit === undefined) throw new RangeError(`hasPattern: unknown pattern ${String(pattern)}`);
-  return (patternMask(value, options.lowLimit ?? DEFAULT_LOW_LIMIT) & bit) !== 0;
+  return (patternMask(value, lowLimitOption(options.lowLimit, 'hasPattern')) & bit) !== 0;
 }

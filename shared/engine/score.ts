@@ -1,4 +1,4 @@
-import { DEFAULT_LOW_LIMIT, PATTERN_IDS, PATTERN_NAMES } from './patterns';
+import { DEFAULT_LOW_LIMIT, PATTERN_IDS, PATTERN_NAMES, isLowLimit } from './patterns';
 import type { Reading, Score, ScoreLine, WeightTable } from './types';
 
 /**
@@ -84,7 +84,8 @@ function line(kind: ScoreLine['kind'], label: string, points: number): ScoreLine
  *          + weights.watchBonus × matched watch patterns
  *
  * `low` is re-judged against `weights.lowLimit`, so one reading can be scored
- * under several tables. Missing or non-finite weights count as 0. The note is
+ * under several tables (an unknown low limit counts as 999). Missing or
+ * non-finite weights count as 0. The note is
  * suggested as a keeper when points ≥ weights.keepThreshold. Every term that
  * applies gets a line (patterns even at weight 0, so the user sees them).
  * Deterministic: the same reading and table always give the same score.
@@ -94,7 +95,7 @@ function line(kind: ScoreLine['kind'], label: string, points: number): ScoreLine
  * if (reading.ok) score(reading, DEFAULT_WEIGHTS).points // 17 (repeater 5 + super repeater 8 + binary 4)
  */
 export function score(reading: ScoreInput, weights: WeightTable): Score {
-  return scoreAt(reading, weights, finite(weights?.lowLimit) || DEFAULT_LOW_LIMIT);
+  return scoreAt(reading, weights, isLowLimit(weights?.lowLimit) ? weights.lowLimit : DEFAULT_LOW_LIMIT);
 }
 
 /** `score` with the low limit given separately, so `read` can apply its own without copying the table. */

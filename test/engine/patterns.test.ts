@@ -111,3 +111,10 @@ describe('classify', () => {
     expect(ids).toEqual(classify('27272727'));
   });
 });
+
+describe('classify options', () => {
+  it('when the low limit is not one of 9, 99, 999, 9999, 99999, then it refuses with a RangeError', () => {
+    expect(() => classify('00000500', { lowLimit: 500 as never })).toThrow(RangeError);
+    expect(() => hasPattern('00000500', 'low', { lowLimit: 0 as never })).toThrow(RangeError);
+  });
+});

@@ -63,6 +63,13 @@ describe('score', () => {
     expect(s.lines.map((l) => l.label)).toContain('low serial');
   });
 
+  it('when the weight table’s low limit is not an allowed one, then low is judged against 999', () => {
+    const r = reading('00000500');
+    const s = score(r, { ...flat, lowLimit: 100 as never });
+    expect(s.lines.map((l) => l.label)).toContain('low serial');
+    expect(score(reading('00001000'), { ...flat, lowLimit: 5000 as never }).lines.map((l) => l.label)).not.toContain('low serial');
+  });
+
   it('when points reach the keep threshold exactly, then keep is suggested; one below, then not', () => {
     const r = reading('27272727');
     const at = score(r, { ...flat, keepThreshold: 3 });
