@@ -32,7 +32,7 @@ export const lightTheme: Theme = {
   surfaceSunken: '#ECE6D8',
   ink: '#1E2320',
   inkMuted: '#4F5752',
-  inkFaint: '#6E746F',
+  inkFaint: '#666B65',
   line: '#D8D0BE',
   brand: '#2F4A3A',
   onBrand: '#F5F1E8',
