@@ -45,6 +45,7 @@ export type {
   WatchResult,
   WeightTable,
 } from './types';
+export type { TradeNote } from '../trade/types';
 
 export { parseSerial, MAX_SERIAL_TEXT } from './parse';
 export {
