@@ -38,6 +38,8 @@ export default defineConfig({
         test: {
           name: 'components',
           include: ['test/components/**/*.test.{ts,tsx}'],
+          // react-native-svg's CommonJS build requires react-native; inlining lets the alias above apply.
+          server: { deps: { inline: ['react-native-svg'] } },
           environment: 'happy-dom',
           setupFiles: ['test/support/components-setup.ts'],
         },

@@ -93,6 +93,9 @@ describe.each([
       const made = hunts.body.items.filter((hunt) => hunt.title === 'Run from LG 58395120 A');
       expect(made.length).toBeGreaterThanOrEqual(1);
       expect(made[0]).toMatchObject({ plannedStraps: 1, status: 'open', source: 'New notes in sequence' });
+      // Sift opens on the new hunt itself, ready for its first note.
+      await page.getByTestId('switch-hunt').filter({ hasText: 'Run from LG 58395120 A' }).waitFor();
+      await page.getByTestId('keypad').waitFor();
       await page.screenshot({ path: `test-results/screenshots/sweep-to-sift-${name}.png` });
     } finally {
       await browser.close();

@@ -1,5 +1,6 @@
 import { useCallback, useEffect, useMemo, useReducer, useState } from 'react';
 import { ScrollView, StyleSheet, View } from 'react-native';
+import { useFocusEffect } from 'expo-router';
 import { read } from '@shared/engine';
 import { districtByLetter } from '@shared/trade';
 import { Button } from '@/components/ui/button';
@@ -43,6 +44,13 @@ export function SiftScreen() {
   const sheetStart = sheetQuery.data ?? (sheetQuery.error && sheetHuntId ? { huntId: sheetHuntId, straps: [] } : undefined);
   const session = useSiftSession(sheetStart);
   useEffect(() => setSheetHuntId(session.huntId), [session.huntId]);
+  const reloadSession = session.reload;
+  useFocusEffect(
+    useCallback(() => {
+      void reloadSession();
+      setChoosing(false);
+    }, [reloadSession]),
+  );
 
   // The reading is the engine's, on the device: no request stands between the eighth key and the verdict.
   const reading = useMemo(

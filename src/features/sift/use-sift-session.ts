@@ -35,12 +35,17 @@ export function useSiftSession(sheet: SheetStart | undefined) {
   const [count, setCount] = useState<StrapCount | null>(null);
   const countRef = useRef<StrapCount | null>(null);
 
-  useEffect(() => {
-    void kv.get<CurrentHunt>(CURRENT_KEY).then((saved) => {
-      setHunt(saved && typeof saved === 'object' && typeof saved.id === 'string' ? saved : null);
-      setLoaded(true);
-    });
+  // Other screens (Sweep, a hunt page) may choose the hunt to sift; Sift re-reads it whenever it is shown.
+  const reload = useCallback(async () => {
+    const saved = await kv.get<CurrentHunt>(CURRENT_KEY);
+    const next = saved && typeof saved === 'object' && typeof saved.id === 'string' ? saved : null;
+    setHunt((current) => (current?.id === next?.id && current?.title === next?.title ? current : next));
+    setLoaded(true);
   }, []);
+
+  useEffect(() => {
+    void reload();
+  }, [reload]);
 
   useEffect(() => {
     countRef.current = null;
@@ -118,5 +123,5 @@ export function useSiftSession(sheet: SheetStart | undefined) {
     [save],
   );
 
-  return { loaded, hunt, huntId, count, selectHunt, log, undo, moveToStrap, markPulledHandled };
+  return { loaded, reload, hunt, huntId, count, selectHunt, log, undo, moveToStrap, markPulledHandled };
 }
