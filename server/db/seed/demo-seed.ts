@@ -5,7 +5,7 @@ import type { ScanInput } from '../../../shared/contracts/scans';
 import type { WeightTableValues } from '../../../shared/contracts/weights';
 import { hashPassword } from '../../features/auth/passwords';
 import { InMemoryResetOutbox } from '../../features/auth/reset-mailer';
-import { serverReading } from '../../features/scans/scans.service';
+import { storedReading } from '../../features/scans/scan-reading';
 import { UserEntity, type UserRole } from '../../features/users/user.entity';
 import { createServices } from '../../services';
 import { DEMO_ADMIN, DEMO_COLLECTOR, DEMO_CREW } from './demo-accounts';
@@ -142,8 +142,8 @@ export async function seedDemo(dataSource: DataSource): Promise<{ created: strin
     const contextMine = await services.weights.readingContext(me);
     const contextCrew = await services.weights.readingContext(crew.user.id);
     for (const item of plan) {
-      const reading = serverReading(item.scan.serial, item.byCrew ? contextCrew : contextMine, { star: item.scan.star, denomination: hunt.denomination });
-      item.scan.pulled = item.find || (reading.ok && reading.score.keep);
+      const result = storedReading(item.scan.serial, item.byCrew ? contextCrew : contextMine, { star: item.scan.star });
+      item.scan.pulled = item.find || (result.ok && result.reading.keep);
     }
     for (const [user, scans] of [
       [me, mine],

@@ -1,19 +1,17 @@
 import type { DataSource } from 'typeorm';
-import { read } from '../../../shared/engine';
-import type { Reading } from '../../../shared/engine';
 import { scanInput, type RejectedScan, type ScanBatchResponse, type ScanListQuery, type ScanPage } from '../../../shared/contracts/scans';
 import { HttpError, fieldsFromZod, forbidden, notFound } from '../../lib/errors';
 import { decodeCursor, encodeCursor, timeIdCursor } from '../../lib/cursor';
 import { idsOf, maskOf } from '../../lib/patterns';
 import { huntAccess } from '../crew/hunt-access';
 import type { HuntStatus } from '../hunts/hunt.entity';
-import type { ReadingContext, WeightsService } from '../weights/weights.service';
+import type { WeightsService } from '../weights/weights.service';
+import { storedReading, type StoredReading } from './scan-reading';
 
 interface VisibleHunt {
   id: string;
   status: HuntStatus;
   closed_at: Date | null;
-  denomination: number;
 }
 
 /** One scan ready to insert: the device's facts plus the server's own reading. */
@@ -24,12 +22,7 @@ interface Prepared {
   serial: string;
   pulled: boolean;
   scannedAt: string;
-  reading: Reading;
-}
-
-/** Reads a serial as the server stores it; exported so tests can hold the stored row against the engine. */
-export function serverReading(serial: string, context: ReadingContext, facts: { star?: boolean; denomination?: number }): ReturnType<typeof read> {
-  return read(serial, { weights: context.weights, watch: context.watch, star: facts.star === true, denomination: facts.denomination });
+  reading: StoredReading;
 }
 
 function fieldSummary(fields: Record<string, string>): string {
@@ -70,7 +63,7 @@ export class ScansService {
     const [hunts, context] = await Promise.all([
       huntIds.length
         ? (this.dataSource.query(
-            `SELECT h.id, h.status, h.closed_at, h.denomination
+            `SELECT h.id, h.status, h.closed_at
                FROM hunts h JOIN hunt_members m ON m.hunt_id = h.id AND m.user_id = $1
               WHERE h.id = ANY($2::uuid[])`,
             [userId, huntIds],
@@ -92,9 +85,9 @@ export class ScansService {
         rejected.push({ id, code: 'hunt-closed', error: 'The hunt was closed before this note was logged' });
         continue;
       }
-      const reading = serverReading(input.serial, context, { star: input.star, denomination: hunt.denomination });
-      if (!reading.ok) {
-        rejected.push({ id, code: 'unreadable-serial', error: reading.error.message });
+      const result = storedReading(input.serial, context, { star: input.star });
+      if (!result.ok) {
+        rejected.push({ id, code: 'unreadable-serial', error: result.message });
         continue;
       }
       prepared.push({
@@ -104,7 +97,7 @@ export class ScansService {
         serial: input.serial,
         pulled: input.pulled === true,
         scannedAt: new Date(input.scannedAt).toISOString(),
-        reading,
+        reading: result.reading,
       });
     }
 
@@ -155,8 +148,8 @@ export class ScansService {
         scans.map((s) => s.reading.district),
         scans.map((s) => s.pulled),
         scans.map((s) => maskOf(s.reading.patterns)),
-        scans.map((s) => s.reading.score.points),
-        scans.map((s) => s.reading.score.keep),
+        scans.map((s) => s.reading.points),
+        scans.map((s) => s.reading.keep),
         scans.map((s) => s.scannedAt),
       ],
     );
