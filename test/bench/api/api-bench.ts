@@ -174,9 +174,11 @@ async function main(): Promise<void> {
       '| --- | --- | --- | --- |',
       ...rows.map((r) => `| ${r.measure} | ${r.result} | ${r.target} | ${r.ok === null ? '—' : r.ok ? 'yes' : '**no**'} |`),
       '',
-      'How it is fast: a batch is one `INSERT … SELECT FROM unnest(…) ON CONFLICT (id) DO NOTHING RETURNING id` whatever its size;',
-      'each scan stores its patterns as a bit mask, so a tally counts every pattern in one pass over the hunt’s rows through',
-      'the `scans (hunt_id, scanned_at, id)` index.',
+      'How it is fast: a batch is one `INSERT … SELECT FROM unnest(…) ON CONFLICT (id) DO NOTHING RETURNING id` whatever its size,',
+      'and each serial is read with the engine’s parse, classify, features, watch and score (what `read()` stores, held equal to it',
+      'by test/server/scan-reading.test.ts) without the near misses, neighbours and odds a stored scan never shows: using the full',
+      '`read()` doubled the batch time. Each scan stores its patterns as a bit mask, so a tally counts every pattern in one pass',
+      'over the hunt’s rows through the `scans (hunt_id, scanned_at, id)` index.',
       '',
     ].join('\n');
     const existing = existsSync(docPath) ? readFileSync(docPath, 'utf8') : '# Performance\n';
