@@ -26,15 +26,24 @@ apt_install() {
   fi
 }
 
-# npm ci when node_modules is missing or older than the lock file.
+# Dependencies follow the lock file: `npm ci` on a fresh clone; when the lock file changed under an
+# existing node_modules, a non-destructive `npm install` (an `npm ci` would delete the folder while
+# other processes may be using it). The stamp keeps the lock file's hash outside node_modules.
 ensure_node_modules() {
   mkdir -p "$DATA_DIR"
-  local stamp="node_modules/.strapsift-installed"
-  if [ ! -f "$stamp" ] || [ package-lock.json -nt "$stamp" ] || [ package.json -nt "$stamp" ]; then
+  local stamp="$DATA_DIR/npm-lock.sha" want have=""
+  want="$(sha1sum package-lock.json | cut -d' ' -f1)"
+  [ -f "$stamp" ] && have="$(cat "$stamp")"
+  if [ ! -d node_modules/.bin ] || [ ! -x node_modules/.bin/tsx ]; then
     say "installing dependencies (npm ci)"
     npm ci --no-audit --no-fund --loglevel=error || die "npm ci failed"
-    touch "$stamp"
+  elif [ "$want" != "$have" ]; then
+    say "lock file changed: updating dependencies (npm install)"
+    npm install --no-audit --no-fund --loglevel=error || die "npm install failed"
+  else
+    return 0
   fi
+  sha1sum package-lock.json | cut -d' ' -f1 >"$stamp"
 }
 
 pg_bin() {
