@@ -153,3 +153,35 @@ describe('the offline scan queue', () => {
     queue.dispose();
   });
 });
+
+describe('undo while an upload is under way', () => {
+  it('when a note is undone while its batch is in flight and the answer is lost, then it is still deleted on the server', async () => {
+    const server = fakeServer();
+    let release: () => void = () => undefined;
+    const gate = new Promise<void>((resolve) => {
+      release = resolve;
+    });
+    let lossy = true;
+    const transport: QueueTransport = {
+      upload: async (scans) => {
+        const answer = await server.transport.upload(scans);
+        if (!lossy) return answer;
+        await gate;
+        throw new ApiError(0, 'offline', 'the answer never arrived');
+      },
+      remove: (id) => server.transport.remove(id),
+    };
+    const queue = new ScanQueue('q', transport, memoryStorage());
+    await queue.add(scan(1));
+    const flushing = queue.flush();
+    await queue.undo(scan(1).id);
+    release();
+    await flushing;
+    expect(server.stored.has(scan(1).id)).toBe(true);
+    lossy = false;
+    await queue.flush();
+    expect(server.stored.has(scan(1).id)).toBe(false);
+    expect(queue.getSnapshot().waiting).toBe(0);
+    queue.dispose();
+  });
+});

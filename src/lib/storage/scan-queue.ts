@@ -79,6 +79,8 @@ export class ScanQueue {
   private offline = false;
   private lastSyncedAt: string | null = null;
   private writeChain: Promise<void> = Promise.resolve();
+  /** Notes in a batch whose answer hasn't come back: the server may already hold them. */
+  private inFlight = new Set<string>();
 
   constructor(
     private readonly storageKey: string,
@@ -119,11 +121,16 @@ export class ScanQueue {
   async undo(id: string): Promise<void> {
     await this.loaded;
     const stillHere = this.state.pending.some((scan) => scan.id === id);
-    this.state = stillHere
-      ? { ...this.state, pending: this.state.pending.filter((scan) => scan.id !== id) }
-      : { ...this.state, undone: [...this.state.undone, id] };
+    // A note whose upload has started may be stored already even if no answer came back, so it is
+    // deleted on the server too (a 404 there counts as done).
+    const mayBeStored = !stillHere || this.inFlight.has(id);
+    this.state = {
+      ...this.state,
+      pending: this.state.pending.filter((scan) => scan.id !== id),
+      undone: mayBeStored ? [...this.state.undone, id] : this.state.undone,
+    };
     await this.persist();
-    if (!stillHere) this.schedule(DEBOUNCE_MS);
+    if (mayBeStored) this.schedule(DEBOUNCE_MS);
   }
 
   dismissRejected(): void {
@@ -158,7 +165,10 @@ export class ScanQueue {
       while (this.state.pending.length) {
         const batch = this.state.pending.slice(0, BATCH_SIZE);
         this.setStatus('syncing');
-        const answer = await this.transport.upload(batch);
+        for (const scan of batch) this.inFlight.add(scan.id);
+        const answer = await this.transport.upload(batch).finally(() => {
+          for (const scan of batch) this.inFlight.delete(scan.id);
+        });
         const done = new Set([...answer.stored, ...answer.duplicates, ...answer.rejected.map((item) => item.id)]);
         const rejected = answer.rejected
           .map((item) => ({ scan: batch.find((scan) => scan.id === item.id), error: item.error }))
