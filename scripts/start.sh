@@ -28,7 +28,7 @@ ensure_web_export
 node_modules/.bin/tsx scripts/fakes.ts &
 PIDS+=($!)
 
-node_modules/.bin/tsx server/main.ts &
+node --import tsx server/main.ts &
 SERVER_PID=$!
 PIDS+=($SERVER_PID)
 

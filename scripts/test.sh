@@ -55,7 +55,7 @@ E2E_DB_URL="$(database_url "${P}_e2e")"
 DATABASE_URL="$E2E_DB_URL" run_migrations
 DATABASE_URL="$E2E_DB_URL" node_modules/.bin/tsx server/db/seed/run-seed.ts >"$DATA_DIR/e2e-seed.log" 2>&1 \
   || { cat "$DATA_DIR/e2e-seed.log" >&2; die "seeding the browser-test database failed"; }
-DATABASE_URL="$E2E_DB_URL" PORT="$E2E_PORT" HOST=127.0.0.1 node_modules/.bin/tsx server/main.ts >"$DATA_DIR/e2e-server.log" 2>&1 &
+DATABASE_URL="$E2E_DB_URL" PORT="$E2E_PORT" HOST=127.0.0.1 node --import tsx server/main.ts >"$DATA_DIR/e2e-server.log" 2>&1 &
 PIDS+=($!)
 E2E_SERVER_PID=$!
 for _ in $(seq 1 150); do

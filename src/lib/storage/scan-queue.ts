@@ -1,6 +1,4 @@
-import { api } from '../api/client';
 import { ApiError } from '../api/api-error';
-import { kv } from './kv';
 
 /** One logged note as the device keeps it until the server has it. */
 export interface QueuedScan {
@@ -41,30 +39,29 @@ export interface BatchAnswer {
   rejected: { id: string; error: string }[];
 }
 
+/** Where the queue keeps itself: device storage in the app, memory in tests. */
+export interface QueueStorage {
+  get<T>(key: string): Promise<T | null>;
+  set(key: string, value: unknown): Promise<void>;
+}
+
 export interface QueueTransport {
   upload(scans: QueuedScan[]): Promise<BatchAnswer>;
   remove(id: string): Promise<void>;
 }
 
-const BATCH_SIZE = 500;
-const DEBOUNCE_MS = 800;
-const MAX_BACKOFF_MS = 60_000;
+/** How the queue paces itself; tests and the fault rig shorten the waits. */
+export interface QueueTiming {
+  batchSize: number;
+  debounceMs: number;
+  firstBackoffMs: number;
+  maxBackoffMs: number;
+}
 
-export const httpTransport: QueueTransport = {
-  upload: (scans) => api<BatchAnswer>('/scans/batch', { method: 'POST', body: { scans } }),
-  async remove(id) {
-    try {
-      await api(`/scans/${id}`, { method: 'DELETE' });
-    } catch (error) {
-      // Already gone (another device, or an earlier try that lost its answer) is success.
-      if (error instanceof ApiError && error.status === 404) return;
-      throw error;
-    }
-  },
-};
+export const DEFAULT_TIMING: QueueTiming = { batchSize: 500, debounceMs: 800, firstBackoffMs: 1000, maxBackoffMs: 60_000 };
 
 /**
- * The device-first scan log: every note is written to storage before the keypad moves on,
+ * The device-first scan log (kept free of React Native imports so Node tests and the fault rig run it as is): every note is written to storage before the keypad moves on,
  * then uploaded in batches with backoff. Uploads are idempotent on the server (client ids),
  * so a batch whose answer was lost is simply sent again.
  */
@@ -84,8 +81,9 @@ export class ScanQueue {
 
   constructor(
     private readonly storageKey: string,
-    private readonly transport: QueueTransport = httpTransport,
-    private readonly storage: Pick<typeof kv, 'get' | 'set'> = kv,
+    private readonly transport: QueueTransport,
+    private readonly storage: QueueStorage,
+    private readonly timing: QueueTiming = DEFAULT_TIMING,
   ) {
     this.loaded = this.storage.get<PersistedQueue>(storageKey).then((saved) => {
       if (saved) this.state = { pending: saved.pending ?? [], undone: saved.undone ?? [], rejected: saved.rejected ?? [] };
@@ -114,7 +112,7 @@ export class ScanQueue {
     await this.loaded;
     this.state = { ...this.state, pending: [...this.state.pending, scan] };
     await this.persist();
-    this.schedule(this.state.pending.length >= BATCH_SIZE ? 0 : DEBOUNCE_MS);
+    this.schedule(this.state.pending.length >= this.timing.batchSize ? 0 : this.timing.debounceMs);
   }
 
   /** Takes a note back: dropped from the queue if it hasn't left yet, else deleted on the server later. */
@@ -130,7 +128,7 @@ export class ScanQueue {
       undone: mayBeStored ? [...this.state.undone, id] : this.state.undone,
     };
     await this.persist();
-    if (mayBeStored) this.schedule(DEBOUNCE_MS);
+    if (mayBeStored) this.schedule(this.timing.debounceMs);
   }
 
   dismissRejected(): void {
@@ -163,7 +161,7 @@ export class ScanQueue {
         await this.persist();
       }
       while (this.state.pending.length) {
-        const batch = this.state.pending.slice(0, BATCH_SIZE);
+        const batch = this.state.pending.slice(0, this.timing.batchSize);
         this.setStatus('syncing');
         for (const scan of batch) this.inFlight.add(scan.id);
         const answer = await this.transport.upload(batch).finally(() => {
@@ -195,7 +193,7 @@ export class ScanQueue {
         return;
       }
       this.publish();
-      const backoff = Math.min(MAX_BACKOFF_MS, 1000 * 2 ** Math.min(this.failures - 1, 6));
+      const backoff = Math.min(this.timing.maxBackoffMs, this.timing.firstBackoffMs * 2 ** Math.min(this.failures - 1, 6));
       this.schedule(backoff * (0.75 + Math.random() * 0.5));
     }
   }

@@ -1,6 +1,8 @@
 import { useEffect, useSyncExternalStore } from 'react';
 import { useSession } from '../session/session-provider';
 import { onNetworkReturn } from './network-events';
+import { httpTransport } from './http-transport';
+import { kv } from './kv';
 import { ScanQueue, type QueueSnapshot } from './scan-queue';
 
 const queues = new Map<string, ScanQueue>();
@@ -9,7 +11,7 @@ const queues = new Map<string, ScanQueue>();
 export function scanQueueFor(userId: string): ScanQueue {
   let queue = queues.get(userId);
   if (!queue) {
-    queue = new ScanQueue(`strapsift.queue.${userId}`);
+    queue = new ScanQueue(`strapsift.queue.${userId}`, httpTransport, kv);
     queues.set(userId, queue);
   }
   return queue;
