@@ -1,5 +1,14 @@
+import { createSecretKey, type KeyObject } from 'node:crypto';
 import jwt from 'jsonwebtoken';
 import { config } from '../config';
+
+// One key object for the life of the process: jsonwebtoken would otherwise build one on every check.
+let key: { secret: string; object: KeyObject } | null = null;
+function signingKey(): KeyObject {
+  const secret = config().JWT_SECRET;
+  if (key?.secret !== secret) key = { secret, object: createSecretKey(Buffer.from(secret, 'utf8')) };
+  return key.object;
+}
 
 export const ACCESS_TOKEN_SECONDS = 15 * 60;
 export const REFRESH_TOKEN_SECONDS = 30 * 24 * 60 * 60;
@@ -14,7 +23,7 @@ interface TokenClaims {
 }
 
 function sign(kind: TokenKind, userId: string, tokenVersion: number, seconds: number): string {
-  return jwt.sign({ ver: tokenVersion, typ: kind }, config().JWT_SECRET, {
+  return jwt.sign({ ver: tokenVersion, typ: kind }, signingKey(), {
     subject: userId,
     expiresIn: seconds,
     algorithm: 'HS256',
@@ -28,7 +37,7 @@ export const signRefreshToken = (userId: string, tokenVersion: number) => sign('
 /** Returns the claims of a valid token of the wanted kind, or null for anything expired, forged or malformed. */
 export function verifyToken(token: string, kind: TokenKind): TokenClaims | null {
   try {
-    const claims = jwt.verify(token, config().JWT_SECRET, { algorithms: ['HS256'], issuer: 'strapsift' });
+    const claims = jwt.verify(token, signingKey(), { algorithms: ['HS256'], issuer: 'strapsift' });
     if (typeof claims !== 'object' || claims === null) return null;
     const { sub, ver, typ } = claims as Partial<TokenClaims>;
     if (typ !== kind || typeof sub !== 'string' || typeof ver !== 'number') return null;

@@ -1,0 +1,9 @@
+#!/usr/bin/env bash
+# npm run load: load and fault runs against servers on 127.0.0.1 only; stops what it starts.
+set -euo pipefail
+source "$(dirname "$0")/lib/common.sh"
+trap stop_postgres_if_started EXIT
+ensure_node_modules
+ensure_postgres
+export PGPORT
+node --import tsx test/load/load.ts "$@"
