@@ -7,18 +7,26 @@ import { adminRoutes } from './features/admin/admin.routes';
 import { authRoutes } from './features/auth/auth.routes';
 import type { ResetMailer } from './features/auth/reset-mailer';
 import { crewRoutes } from './features/crew/crew.routes';
+import { invitesRoutes } from './features/crew/invites.routes';
+import { huntSummaryRoutes } from './features/hunts/hunt-summary';
 import { healthRoutes } from './features/health/health.routes';
 import { huntsRoutes } from './features/hunts/hunts.routes';
 import { keepersRoutes } from './features/keepers/keepers.routes';
+import { photosRoutes } from './features/photos/photos.routes';
 import { scansRoutes } from './features/scans/scans.routes';
+import { shareRoutes } from './features/share/share.routes';
 import { strapsRoutes } from './features/straps/straps.routes';
 import { tallyRoutes } from './features/tally/tally.routes';
+import { transferRoutes } from './features/transfer/transfer.routes';
 import { usersRoutes } from './features/users/users.routes';
 import { watchRoutes } from './features/watch/watch.routes';
 import { weightsRoutes } from './features/weights/weights.routes';
 import { requireAuth } from './lib/auth-middleware';
 import { apiNotFound, errorHandler } from './lib/errors';
-import { logger } from './lib/logger';
+import { logger, scrubUrl } from './lib/logger';
+import type { Mailer } from './lib/mail';
+import type { ObjectStore } from './lib/object-store';
+import { resetRateLimits } from './lib/rate-limit';
 import { webAppRoutes } from './lib/web-app';
 import { createServices } from './services';
 
@@ -26,12 +34,16 @@ export interface AppOptions {
   dataSource: DataSource;
   /** Folder of the Expo web export to serve beside the API; omitted in API-only tests. */
   webDist?: string;
-  /** Where password-reset messages go; tests pass an InMemoryResetOutbox to read the tokens. */
+  /** Where password-reset messages go; by default rendered and sent through `mailer`. */
   resetMailer?: ResetMailer;
+  /** Where mail goes; by default SMTP from the config (locally the mail catcher). */
+  mailer?: Mailer;
+  /** Where photo bytes go; by default S3 from the config (locally the s3rver fake). */
+  objectStore?: ObjectStore;
 }
 
 /** Builds the Express app without listening, so tests can drive it in-process with supertest. */
-export function createApp({ dataSource, webDist, resetMailer }: AppOptions): Express {
+export function createApp({ dataSource, webDist, resetMailer, mailer, objectStore }: AppOptions): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
@@ -49,21 +61,39 @@ export function createApp({ dataSource, webDist, resetMailer }: AppOptions): Exp
       crossOriginEmbedderPolicy: false,
     }),
   );
-  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use(
+    pinoHttp({
+      logger,
+      autoLogging: { ignore: (req) => req.url === '/api/health' },
+      // Share, invitation and reset links carry their secret in the address: it never reaches a log line.
+      serializers: {
+        req: (req: { url?: string; query?: unknown; params?: unknown } & Record<string, unknown>) => ({ ...req, url: scrubUrl(req.url ?? ''), query: undefined, params: undefined }),
+      },
+    }),
+  );
 
   const api = express.Router();
   api.use(express.json({ limit: '2mb' }));
-  const services = createServices(dataSource, { resetMailer });
+  const services = createServices(dataSource, { resetMailer, mailer, objectStore });
   const authed = requireAuth(dataSource);
   api.use(healthRoutes(dataSource));
+  const resetLimits = resetRateLimits();
+  api.post('/auth/forgot', resetLimits.forgot);
+  api.post('/auth/reset', resetLimits.reset);
   api.use(authRoutes(services.auth, services.passwordReset));
   api.use(usersRoutes(services.users, authed));
   api.use(huntsRoutes(services.hunts, authed));
   api.use(crewRoutes(services.crew, authed));
+  api.use(invitesRoutes(services.invites, authed));
+  api.use(huntSummaryRoutes(services.huntSummary, authed));
   api.use(strapsRoutes(services.straps, authed));
   api.use(scansRoutes(services.scans, authed));
   api.use(tallyRoutes(services.tally, authed));
+  // Photos and share links before the keepers' own routes, which guard all of /keepers themselves.
+  api.use(photosRoutes(services.photos, authed));
+  api.use(shareRoutes(services.share, authed));
   api.use(keepersRoutes(services.keepers, authed));
+  api.use(transferRoutes(services.exporter, services.importer, authed));
   api.use(weightsRoutes(services.weights, authed));
   api.use(watchRoutes(services.watch, authed));
   api.use(adminRoutes(services.admin, authed));
