@@ -3,6 +3,7 @@ import { promisify } from 'node:util';
 import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { migrations } from '../../server/db/migrations';
+import { seedDemo } from '../../server/db/seed/demo-seed';
 import { openTestDataSource } from '../support/database';
 
 const run = promisify(execFile);
@@ -45,8 +46,18 @@ describe('database migrations', () => {
     await expect(cli).resolves.toMatchObject({ stdout: expect.stringContaining('No changes in database schema were found') });
   }, 60_000);
 
-  it('when every migration is reverted, then the database is empty again', async () => {
+  it('when the demo data is in and every migration is reverted, then the database is empty again', async () => {
+    await seedDemo(dataSource);
+    const [{ count }] = await dataSource.query('SELECT count(*)::int AS count FROM scans');
+    expect(count).toBeGreaterThan(1000);
     for (let index = 0; index < migrations.length; index++) await dataSource.undoLastMigration({ transaction: 'each' });
     expect(await userTables(dataSource)).toEqual([]);
+  });
+
+  it('when the migrations run again after a full revert, then the schema and the demo come back', async () => {
+    const applied = await dataSource.runMigrations({ transaction: 'each' });
+    expect(applied).toHaveLength(migrations.length);
+    const { created } = await seedDemo(dataSource);
+    expect(created.length).toBeGreaterThan(0);
   });
 });
