@@ -3,20 +3,33 @@ import { config } from './config';
 import { AdminService } from './features/admin/admin.service';
 import { AuthService } from './features/auth/auth.service';
 import { PasswordResetService } from './features/auth/password-reset.service';
-import { InMemoryResetOutbox, type ResetMailer } from './features/auth/reset-mailer';
+import { SmtpResetMailer } from './features/auth/reset-mail';
+import type { ResetMailer } from './features/auth/reset-mailer';
 import { CrewService } from './features/crew/crew.service';
+import { InvitesService } from './features/crew/invites.service';
+import { HuntSummaryService } from './features/hunts/hunt-summary';
 import { HuntsService } from './features/hunts/hunts.service';
 import { KeepersService } from './features/keepers/keepers.service';
+import { PhotosService } from './features/photos/photos.service';
 import { ScansService } from './features/scans/scans.service';
+import { ShareService } from './features/share/share.service';
 import { StrapsService } from './features/straps/straps.service';
 import { TallyService } from './features/tally/tally.service';
+import { ExportService } from './features/transfer/export.service';
+import { ImportService } from './features/transfer/import.service';
 import { UsersService } from './features/users/users.service';
 import { WatchService } from './features/watch/watch.service';
 import { WeightsService } from './features/weights/weights.service';
+import { createSmtpMailer, type Mailer } from './lib/mail';
+import { createObjectStore, type ObjectStore } from './lib/object-store';
 
 export interface ServiceOptions {
-  /** Where password-reset messages go; an in-memory outbox until the mail issue brings SMTP. */
+  /** Where every mail goes; by default SMTP as configured (locally the mail catcher). */
+  mailer?: Mailer;
+  /** Where password-reset messages go; by default rendered and sent through `mailer`. */
   resetMailer?: ResetMailer;
+  /** Where photo bytes go; by default S3 as configured (locally the s3rver fake). */
+  objectStore?: ObjectStore;
 }
 
 /** One instance of each service per app, wired here so routes stay thin and tests can build the whole set. */
@@ -24,23 +37,59 @@ export function createServices(dataSource: DataSource, options: ServiceOptions =
   const auth = new AuthService(dataSource);
   const users = new UsersService(dataSource);
   const weights = new WeightsService(dataSource);
-  const resetMailer = options.resetMailer ?? new InMemoryResetOutbox(100, config().NODE_ENV === 'development');
-  const passwordReset = new PasswordResetService(dataSource, auth, resetMailer, () => config().PUBLIC_URL);
+  const publicUrl = () => config().PUBLIC_URL;
+  const mailer = options.mailer ?? createSmtpMailer(config());
+  const objectStore = options.objectStore ?? createObjectStore(config());
+  const resetMailer = options.resetMailer ?? new SmtpResetMailer(mailer);
+  const passwordReset = new PasswordResetService(dataSource, auth, resetMailer, publicUrl);
   const hunts = new HuntsService(dataSource, weights);
   const crew = new CrewService(dataSource);
   const straps = new StrapsService(dataSource);
   const scans = new ScansService(dataSource, weights);
   const tally = new TallyService(dataSource, weights);
-  const keepers = new KeepersService(dataSource, weights);
+  const photos = new PhotosService(dataSource, objectStore);
+  const keepers = new KeepersService(dataSource, weights, photos);
   const watch = new WatchService(dataSource);
   const admin = new AdminService(dataSource);
+  const share = new ShareService(dataSource, photos, publicUrl);
+  const invites = new InvitesService(dataSource, mailer, publicUrl);
+  const huntSummary = new HuntSummaryService(dataSource, hunts, tally, mailer, publicUrl);
+  const exporter = new ExportService(dataSource);
+  const importer = new ImportService(dataSource, scans, keepers);
 
   // Every new account starts with the engine's default weight table, active.
   auth.onRegister((user) => weights.ensureDefault(user.id));
   // Shared hunts outlive their owner's account, so the crew's notes are not deleted with it.
   users.onBeforeDelete((userId) => crew.handOverHunts(userId));
+  // Photo bytes live outside PostgreSQL: they go from the object store before their rows cascade away.
+  users.onBeforeDelete(async (userId) => {
+    await photos.removeAllForUser(userId);
+  });
+  keepers.onBeforeRemove((userId, keeperId) => photos.removeForKeeper(userId, keeperId));
 
-  return { auth, users, weights, passwordReset, resetMailer, hunts, crew, straps, scans, tally, keepers, watch, admin };
+  return {
+    auth,
+    users,
+    weights,
+    passwordReset,
+    resetMailer,
+    mailer,
+    objectStore,
+    hunts,
+    crew,
+    invites,
+    huntSummary,
+    straps,
+    scans,
+    tally,
+    keepers,
+    photos,
+    share,
+    exporter,
+    importer,
+    watch,
+    admin,
+  };
 }
 
 export type Services = ReturnType<typeof createServices>;

@@ -17,3 +17,14 @@ export const logger = pino({
   redact: { paths: redactedPaths, censor: '[redacted]' },
   base: { service: 'strapsift' },
 });
+
+/**
+ * An address as it may be logged: the secret part of share, invitation and reset links replaced, and
+ * no query string at all (tokens travel there too).
+ *
+ * scrubUrl('/api/share/abc…/photos/1') → '/api/share/[redacted]/photos/1'
+ */
+export function scrubUrl(url: string): string {
+  const [path = ''] = url.split('?');
+  return path.replace(/\/(share|invite|invites)\/[^/]+/g, '/$1/[redacted]') + (url.includes('?') ? '?[redacted]' : '');
+}

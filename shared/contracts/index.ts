@@ -10,3 +10,7 @@ export * from './keepers';
 export * from './weights';
 export * from './watch';
 export * from './admin';
+export * from './photos';
+export * from './share';
+export * from './invites';
+export * from './transfer';

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { cursorQuery, denomination, isoDateTime, page, patternId, serialDigits, serialText, uuid } from './common';
+import { photoView } from './photos';
 import { readingSchema } from './reading';
 
 export const keeperStatus = z.enum(['kept', 'traded', 'sold', 'spent']);
@@ -82,11 +83,13 @@ export const keeperSummary = z.object({
   foundAt: isoDateTime,
   createdAt: isoDateTime,
   updatedAt: isoDateTime,
+  /** API path of a small picture for lists: the front photo's thumbnail, else the back's; null without photos. */
+  thumbUrl: z.string().nullable(),
 });
 export type KeeperSummary = z.infer<typeof keeperSummary>;
 
-/** The keeper page: the summary plus a fresh reading (patterns, odds, near misses, score, trade notes). */
-export const keeperDetail = keeperSummary.extend({ reading: readingSchema });
+/** The keeper page: the summary plus a fresh reading (patterns, odds, near misses, score, trade notes) and its photos. */
+export const keeperDetail = keeperSummary.extend({ reading: readingSchema, photos: z.array(photoView) });
 export type KeeperDetail = z.infer<typeof keeperDetail>;
 
 export const keeperSort = z.enum(['newest', 'oldest', 'points', 'value', 'grade', 'serial']);

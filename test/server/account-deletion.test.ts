@@ -1,5 +1,6 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { drawPng } from '../support/images';
 import { addCrew, createHunt, openTestApi, postBatch, registerUser, scanOf, type TestApi, type TestUser } from '../support/api';
 
 let api: TestApi;
@@ -23,6 +24,9 @@ const OWNERSHIP: Record<string, string> = {
   weight_tables: 'SELECT count(*)::int AS n FROM weight_tables WHERE user_id = $1',
   watch_patterns: 'SELECT count(*)::int AS n FROM watch_patterns WHERE user_id = $1',
   password_reset_tokens: 'SELECT count(*)::int AS n FROM password_reset_tokens WHERE user_id = $1',
+  photos: 'SELECT count(*)::int AS n FROM photos WHERE user_id = $1',
+  share_links: 'SELECT count(*)::int AS n FROM share_links WHERE user_id = $1',
+  crew_invites: 'SELECT count(*)::int AS n FROM crew_invites WHERE invited_by = $1',
 };
 
 async function rowsOf(userId: string): Promise<Record<string, number>> {
@@ -31,7 +35,10 @@ async function rowsOf(userId: string): Promise<Record<string, number>> {
   return counts;
 }
 
-/** Gives a user a row in every table: hunts, crew membership elsewhere, straps, scans, a tombstone, keepers, weights, watch, reset token. */
+/**
+ * Gives a user a row in every table: hunts, crew membership elsewhere, straps, scans, a tombstone, keepers,
+ * a photo, a share link, a crew invitation, weights, watch, reset token.
+ */
 async function fillAccount(user: TestUser, partner: TestUser): Promise<void> {
   const hunt = await createHunt(api.app, user);
   const partnersHunt = await createHunt(api.app, partner, { title: `${partner.email}'s box` });
@@ -40,7 +47,10 @@ async function fillAccount(user: TestUser, partner: TestUser): Promise<void> {
   await postBatch(api.app, user, [scanOf(hunt.id, '12121212', { pulled: true }), undone, scanOf(partnersHunt.id, '38055083', { strap: 2 })]);
   await request(api.app).delete(`/api/scans/${undone.id}`).set(user.auth).expect(204);
   await request(api.app).patch(`/api/hunts/${hunt.id}/straps/1`).set(user.auth).send({ swappedIn: 1 }).expect(200);
-  await request(api.app).post('/api/keepers').set(user.auth).send({ serial: '77777777', grade: 45 }).expect(201);
+  const keeper = await request(api.app).post('/api/keepers').set(user.auth).send({ serial: '77777777', grade: 45 }).expect(201);
+  await request(api.app).post(`/api/keepers/${keeper.body.id}/photos`).set(user.auth).field('side', 'front').attach('photo', drawPng(), 'front.png').expect(201);
+  await request(api.app).post(`/api/keepers/${keeper.body.id}/share`).set(user.auth).expect(201);
+  await request(api.app).post(`/api/hunts/${hunt.id}/invites`).set(user.auth).send({ email: `invitee-${user.id}@strapsift.test` }).expect(201);
   await request(api.app).post('/api/weights').set(user.auth).send({ name: 'Second table' }).expect(201);
   await request(api.app).post('/api/watch').set(user.auth).send({ pattern: '1000-2000' }).expect(201);
   await request(api.app).post('/api/auth/forgot').send({ email: user.email }).expect(202);

@@ -2,6 +2,7 @@ import { createHash, randomBytes } from 'node:crypto';
 import type { DataSource } from 'typeorm';
 import type { AuthResponse, ForgotResponse, ResetRequest } from '../../../shared/contracts/auth';
 import { HttpError } from '../../lib/errors';
+import { logger } from '../../lib/logger';
 import { UserEntity } from '../users/user.entity';
 import type { AuthService } from './auth.service';
 import { hashPassword } from './passwords';
@@ -49,7 +50,12 @@ export class PasswordResetService {
       expiresAt,
     ]);
     const link = `${this.publicUrl().replace(/\/$/, '')}/reset-password?token=${encodeURIComponent(token)}`;
-    await this.mailer.sendReset({ to: user.email, displayName: user.displayName, token, link, expiresAt });
+    try {
+      await this.mailer.sendReset({ to: user.email, displayName: user.displayName, token, link, expiresAt });
+    } catch (error) {
+      // The answer must not differ for accounts that exist, so a mail failure is logged, not reported.
+      logger.error({ err: error, userId: user.id }, 'password reset mail could not be sent');
+    }
     return ACCEPTED;
   }
 

@@ -1,6 +1,4 @@
-import { logger } from '../../lib/logger';
-
-/** Everything a reset e-mail needs; the mail issue renders it and sends it over SMTP. */
+/** Everything a reset e-mail needs; SmtpResetMailer (reset-mail.ts) renders it and sends it over SMTP. */
 export interface ResetMessage {
   to: string;
   displayName: string;
@@ -10,28 +8,23 @@ export interface ResetMessage {
   expiresAt: Date;
 }
 
-/** Where reset messages go. The mail issue plugs an SMTP implementation in through createApp's options. */
+/** Where reset messages go: SMTP in the app, an in-memory outbox where a test wants to read the token. */
 export interface ResetMailer {
   sendReset(message: ResetMessage): Promise<void>;
 }
 
 /**
- * Keeps the last messages in memory so tests (and a developer, until mail exists) can read the token.
- * Bounded, so a long-running server cannot grow without limit.
+ * Keeps the last messages in memory so tests can read the token without a mail server.
+ * Bounded, so a long-running process cannot grow without limit.
  */
 export class InMemoryResetOutbox implements ResetMailer {
   readonly sent: ResetMessage[] = [];
 
-  constructor(
-    private readonly capacity = 100,
-    private readonly logLinks = false,
-  ) {}
+  constructor(private readonly capacity = 100) {}
 
   async sendReset(message: ResetMessage): Promise<void> {
     this.sent.push(message);
     if (this.sent.length > this.capacity) this.sent.splice(0, this.sent.length - this.capacity);
-    // Until the mail issue lands, a developer has no other way to open the link; never in production.
-    if (this.logLinks) logger.info({ to: message.to, resetLink: message.link }, 'password reset link (development outbox)');
   }
 
   /** The newest message to an address, if any. */

@@ -10,6 +10,7 @@ import type {
   KeeperSummary,
   UpdateKeeperRequest,
 } from '../../../shared/contracts/keepers';
+import type { PhotoView } from '../../../shared/contracts/photos';
 import { z } from 'zod';
 import { containsPattern } from '../../lib/like';
 import { decodeCursor, encodeCursor } from '../../lib/cursor';
@@ -38,7 +39,16 @@ function unreadable(message: string): HttpError {
   return new HttpError(400, 'invalid', 'Some fields need attention', { serial: message });
 }
 
-function toSummary(keeper: KeeperEntity): KeeperSummary {
+/** Photos of a keeper, as the photo feature answers them; lists use their thumbnails. */
+export interface KeeperPhotos {
+  listFor(keeperIds: readonly string[]): Promise<Map<string, PhotoView[]>>;
+}
+
+function thumbOf(photos: readonly PhotoView[] | undefined): string | null {
+  return photos?.find((photo) => photo.side === 'front')?.thumbUrl ?? photos?.[0]?.thumbUrl ?? null;
+}
+
+function toSummary(keeper: KeeperEntity, photos?: readonly PhotoView[]): KeeperSummary {
   return {
     id: keeper.id,
     serial: keeper.serial,
@@ -61,6 +71,7 @@ function toSummary(keeper: KeeperEntity): KeeperSummary {
     foundAt: keeper.foundAt.toISOString(),
     createdAt: keeper.createdAt.toISOString(),
     updatedAt: keeper.updatedAt.toISOString(),
+    thumbUrl: thumbOf(photos),
   };
 }
 
@@ -79,11 +90,26 @@ const SORTS: Record<KeeperSort, { key: string; dir: 'ASC' | 'DESC'; kind: 'time'
 
 const keeperCursor = z.tuple([z.union([z.string().max(64), z.number()]), z.string().uuid()]);
 
+export type BeforeRemoveKeeper = (userId: string, keeperId: string) => Promise<void>;
+
 export class KeepersService {
+  private readonly beforeRemoveHooks: BeforeRemoveKeeper[] = [];
+
   constructor(
     private readonly dataSource: DataSource,
     private readonly weights: WeightsService,
+    private readonly photos: KeeperPhotos = { listFor: async () => new Map() },
   ) {}
+
+  /** Data kept outside PostgreSQL (photo bytes in the object store) is cleaned up here. */
+  onBeforeRemove(hook: BeforeRemoveKeeper): void {
+    this.beforeRemoveHooks.push(hook);
+  }
+
+  private async detail(keeper: KeeperEntity, reading: Reading): Promise<KeeperDetail> {
+    const photos = (await this.photos.listFor([keeper.id])).get(keeper.id) ?? [];
+    return { ...toSummary(keeper, photos), reading, photos };
+  }
 
   private keepers() {
     return this.dataSource.getRepository(KeeperEntity);
@@ -131,10 +157,11 @@ export class KeepersService {
     const pageRows = rows.slice(0, query.limit);
     const entities = pageRows.length ? await this.keepers().findBy(pageRows.map((row) => ({ id: row.id, userId }))) : [];
     const byId = new Map(entities.map((keeper) => [keeper.id, keeper]));
+    const photos = await this.photos.listFor(pageRows.map((row) => row.id));
     const last = pageRows[pageRows.length - 1];
     const lastKey = last ? (last.sort_key instanceof Date ? last.sort_key.toISOString() : last.sort_key) : null;
     return {
-      items: pageRows.map((row) => toSummary(byId.get(row.id)!)),
+      items: pageRows.map((row) => toSummary(byId.get(row.id)!, photos.get(row.id))),
       nextCursor: rows.length > query.limit && last && lastKey !== null ? encodeCursor([lastKey, last.id]) : null,
     };
   }
@@ -143,7 +170,7 @@ export class KeepersService {
     const keeper = await this.owned(userId, id);
     const reading = readNote(keeper, await this.weights.readingContext(userId));
     if (!reading) throw new Error(`keeper ${id} holds a serial the engine cannot read`);
-    return { ...toSummary(keeper), reading };
+    return this.detail(keeper, reading);
   }
 
   /**
@@ -209,7 +236,7 @@ export class KeepersService {
           foundAt: request.foundAt ? new Date(request.foundAt) : base.foundAt,
         }),
       );
-      return { keeper: { ...toSummary(saved), reading: scored }, created: true };
+      return { keeper: await this.detail(saved, scored), created: true };
     } catch (error) {
       // Two "keep" taps racing for one note: the unique index lets one through, the other gets it back.
       if ((error as { code?: string }).code === '23505' && request.scanId) {
@@ -247,10 +274,12 @@ export class KeepersService {
     keeper.patternMask = maskOf(scored.patterns);
     keeper.points = scored.score.points;
     const saved = await this.keepers().save(keeper);
-    return { ...toSummary(saved), reading: scored };
+    return this.detail(saved, scored);
   }
 
   async remove(userId: string, id: string): Promise<void> {
+    await this.owned(userId, id);
+    for (const hook of this.beforeRemoveHooks) await hook(userId, id);
     const result = await this.keepers().delete({ id, userId });
     if (!result.affected) throw notFound('No such keeper');
   }
