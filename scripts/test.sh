@@ -4,6 +4,9 @@
 set -uo pipefail
 source "$(dirname "$0")/lib/common.sh"
 
+# A preparation step that fails still ends with the line CI reads.
+die() { printf '\033[31m[strapsift] %s\033[0m\n' "$*" >&2; echo "0 passed, 1 failed"; exit 1; }
+
 PIDS=()
 cleanup() {
   trap - EXIT INT TERM
