@@ -19,6 +19,7 @@ trap cleanup EXIT
 trap 'exit 130' INT TERM
 
 set -e
+trap 'echo "0 passed, 1 failed"' ERR
 ensure_node_modules
 ensure_postgres
 [ "${QUICK:-0}" = 1 ] || ensure_chromium
@@ -69,6 +70,7 @@ done
 export E2E_BASE_URL="http://127.0.0.1:$E2E_PORT"
 fi
 set +e
+trap - ERR
 
 rm -f test-results/vitest.json
 node_modules/.bin/vitest run --reporter=default --reporter=json --outputFile.json=test-results/vitest.json "$@"
