@@ -6,7 +6,7 @@ import { useTheme } from '@/theme/theme-provider';
 import { fonts, radius, space } from '@/theme/tokens';
 
 /** The signed-out pages share one calm card with the name and the job in a line. */
-export function AuthFrame({ title, children, footer }: { title: string; children: ReactNode; footer?: { text: string; href: '/sign-in' | '/create-account' | '/forgot-password'; link: string }[] }) {
+export function AuthFrame({ title, children, footer }: { title: string; children: ReactNode; footer?: { text: string; href: string; link: string }[] }) {
   const theme = useTheme();
   return (
     <KeyboardAvoidingView style={[styles.root, { backgroundColor: theme.surface }]} behavior="padding">

@@ -4,6 +4,9 @@ import {
   huntDetail,
   huntList,
   huntTally,
+  inviteList,
+  inviteView,
+  mailSent,
   memberList,
   memberView,
   scanPage,
@@ -11,6 +14,8 @@ import {
   strapSheet,
   type AddMemberRequest,
   type CreateHuntRequest,
+  type CreateInviteRequest,
+  type InviteView,
   type HuntDetail,
   type HuntList,
   type MemberView,
@@ -135,3 +140,25 @@ export async function removeMember(huntId: string, userId: string): Promise<void
   await api(`/hunts/${huntId}/members/${userId}`, { method: 'DELETE' });
   await Promise.all([mutate(huntKeys.members(huntId)), revalidateHunts()]);
 }
+
+export const inviteKeys = { list: (huntId: string) => `/hunts/${huntId}/invites` };
+
+/** Open invitations of a hunt (owner only). */
+export function useInvites(huntId: string | null) {
+  return useSWR(huntId ? inviteKeys.list(huntId) : null, (path: string) => api(path, { schema: inviteList }));
+}
+
+/** Mails an invitation link; whoever accepts it joins as crew, with an account made on the spot if need be. */
+export async function sendInvite(huntId: string, body: CreateInviteRequest): Promise<InviteView> {
+  const invite = await api(`/hunts/${huntId}/invites`, { method: 'POST', body, schema: inviteView });
+  await mutate(inviteKeys.list(huntId));
+  return invite;
+}
+
+export async function withdrawInvite(huntId: string, inviteId: string): Promise<void> {
+  await api(`/hunts/${huntId}/invites/${inviteId}`, { method: 'DELETE' });
+  await mutate(inviteKeys.list(huntId));
+}
+
+/** The hunt's figures by mail, to the owner's own address. */
+export const mailSummary = (huntId: string) => api(`/hunts/${huntId}/summary-mail`, { method: 'POST', schema: mailSent });

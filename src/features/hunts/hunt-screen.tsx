@@ -21,6 +21,7 @@ import { formatCount, formatDate, formatRate } from '../tally/format';
 import {
   addMember,
   closeHunt,
+  mailSummary,
   deleteHunt,
   removeMember,
   updateStrap,
@@ -32,6 +33,7 @@ import {
 } from './api';
 import { CrewList } from './components/crew-list';
 import { HitsTable } from './components/hits-table';
+import { InviteCrew } from './components/invite-crew';
 import { PrintableSheet } from './components/printable-sheet';
 import { StrapSheetEditor } from './components/strap-sheet-editor';
 import { PrintArea, printSheet } from './print-area';
@@ -195,6 +197,7 @@ function CrewBlock({ hunt, onLeft }: { hunt: HuntDetail; onLeft(): void }) {
       ) : (
         <Loading what="the crew" />
       )}
+      {hunt.role === 'owner' && hunt.status === 'open' ? <InviteCrew huntId={hunt.id} /> : null}
     </Section>
   );
 }
@@ -209,6 +212,10 @@ function ManageBlock({ hunt }: { hunt: HuntDetail }) {
     await deleteHunt(hunt.id);
     setAsking(null);
     router.replace('/hunts');
+  });
+  const [mailedTo, setMailedTo] = useState<string | null>(null);
+  const mailing = useSubmit(async () => {
+    setMailedTo((await mailSummary(hunt.id)).to);
   });
   if (hunt.role !== 'owner') {
     return (
@@ -227,10 +234,14 @@ function ManageBlock({ hunt }: { hunt: HuntDetail }) {
           ? 'Close the hunt when the straps have gone back: no more notes can be logged into it, and its figures stay.'
           : `Closed ${hunt.closedAt ? formatDate(hunt.closedAt) : ''}. Its figures stay in your tally.`}
       </Text>
+      {mailing.message ? <Notice tone="error">{mailing.message}</Notice> : null}
+      {mailedTo ? <Notice tone="ok">{`The summary is on its way to ${mailedTo}.`}</Notice> : null}
       <View style={styles.manageActions}>
         {hunt.status === 'open' ? (
           <Button kind="secondary" label="Close hunt" onPress={() => setAsking('close')} testID="close-hunt" />
-        ) : null}
+        ) : (
+          <Button kind="secondary" label="E-mail me the summary" busy={mailing.busy} onPress={() => void mailing.submit()} testID="mail-summary" />
+        )}
         <Button kind="danger" label="Delete hunt" onPress={() => setAsking('delete')} testID="delete-hunt" />
       </View>
       <ConfirmDialog
@@ -238,7 +249,7 @@ function ManageBlock({ hunt }: { hunt: HuntDetail }) {
         title={asking === 'close' ? `Close ${hunt.title}?` : `Delete ${hunt.title}?`}
         message={
           asking === 'close'
-            ? 'Nobody can log notes into it after this, crew included. The strap sheet, hits and tally stay.'
+            ? 'Nobody can log notes into it after this, crew included. The strap sheet, hits and tally stay, and you can e-mail yourself its summary.'
             : `This removes the hunt, its strap sheet and all ${formatCount(hunt.notesSearched)} notes logged in it, for the whole crew. It cannot be undone.`
         }
         confirmLabel={asking === 'close' ? 'Close hunt' : 'Delete for good'}

@@ -13,7 +13,9 @@ import { space } from '@/theme/tokens';
 import { deleteKeeper, updateKeeper, useKeeper } from './api';
 import { keeperTitle } from './components/keeper-card';
 import { KeeperForm } from './components/keeper-form';
+import { KeeperPhotos } from './components/keeper-photos';
 import { KeeperReading } from './components/keeper-reading';
+import { ShareCard } from './components/share-card';
 import { checkKeeperDraft, emptyKeeperDraft, keeperToDraft, type KeeperDraft } from './keeper-draft';
 
 export function KeeperScreen() {
@@ -83,14 +85,11 @@ export function KeeperScreen() {
     </Card>
   );
 
+  const photos = <KeeperPhotos keeperId={keeper.id} photos={keeper.photos} />;
   const side = (
     <>
-      <Card>
-        <Text variant="label" tone="muted">
-          PHOTOS
-        </Text>
-        <Text tone="muted">Front and back photos arrive with the photo store; until then, note where the physical note is kept.</Text>
-      </Card>
+      {isWide ? photos : null}
+      <ShareCard keeperId={keeper.id} />
       <Card>
         <Text variant="label" tone="muted">
           DELETE
@@ -128,6 +127,7 @@ export function KeeperScreen() {
       ) : (
         <>
           {readingCard}
+          {photos}
           {form}
           {side}
         </>

@@ -4,7 +4,6 @@ import { router } from 'expo-router';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { ChoiceRow } from '@/components/ui/choice-row';
-import { ComingNext } from '@/components/ui/coming-next';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
@@ -15,6 +14,8 @@ import { useThemeState, type ThemePreference } from '@/theme/theme-provider';
 import { useLayout } from '@/theme/use-layout';
 import { space } from '@/theme/tokens';
 import { deleteMe, updateMe } from './api';
+import { ExportCard } from './components/export-card';
+import { ImportCard } from './components/import-card';
 
 const THEMES: { value: ThemePreference; label: string }[] = [
   { value: 'system', label: 'Match device' },
@@ -99,7 +100,10 @@ export function YouScreen() {
   );
 
   const data = (
-    <ComingNext what="Your data" points={['Export everything as CSV and JSON', 'Import an old log with a preview of every row']} />
+    <>
+      <ExportCard />
+      <ImportCard />
+    </>
   );
 
   return (

@@ -53,14 +53,39 @@ async function send(path: string, options: RequestOptions<unknown>, token: strin
   }
 }
 
-/** The one typed way to call the API. Components call hooks that call this; nothing else calls fetch. */
-export async function api<T = unknown>(path: string, options: RequestOptions<T> = {}): Promise<T> {
-  let response = await send(path, options as RequestOptions<unknown>, tokens.getAccessToken());
+async function sendWithRefresh(path: string, options: RequestOptions<unknown>): Promise<Response> {
+  let response = await send(path, options, tokens.getAccessToken());
   if (response.status === 401 && !options.anonymous) {
     const fresh = await tokens.refresh();
-    if (fresh) response = await send(path, options as RequestOptions<unknown>, fresh);
+    if (fresh) response = await send(path, options, fresh);
     if (response.status === 401) tokens.onSignedOut();
   }
+  return response;
+}
+
+async function failure(response: Response): Promise<ApiError> {
+  let error: { code?: string; message?: string; fields?: Record<string, string> } | undefined;
+  try {
+    error = ((await response.json()) as { error?: typeof error } | null)?.error;
+  } catch {
+    error = undefined;
+  }
+  return new ApiError(response.status, error?.code ?? 'http_error', error?.message ?? `The server answered ${response.status}`, error?.fields ?? {});
+}
+
+/**
+ * Bytes from the API with the caller's session (photos, export files): an <img> or a link cannot send
+ * the Authorization header, so these come through here and are handed to the page as a Blob.
+ */
+export async function apiBlob(path: string, options: Pick<RequestOptions<unknown>, 'signal' | 'anonymous'> = {}): Promise<Blob> {
+  const response = await sendWithRefresh(path, options);
+  if (!response.ok) throw await failure(response);
+  return response.blob();
+}
+
+/** The one typed way to call the API. Components call hooks that call this; nothing else calls fetch. */
+export async function api<T = unknown>(path: string, options: RequestOptions<T> = {}): Promise<T> {
+  const response = await sendWithRefresh(path, options as RequestOptions<unknown>);
   const text = await response.text();
   let payload: unknown = null;
   if (text) {
@@ -85,4 +110,15 @@ export async function api<T = unknown>(path: string, options: RequestOptions<T> 
     throw new ApiError(response.status, 'bad_response', 'The server sent an answer this version of the app does not understand');
   }
   return parsed.data;
+}
+
+/** An API path as the server writes it in answers (`/api/…`), made absolute for an image source. */
+export function absoluteApiUrl(apiPath: string): string {
+  return `${baseUrl}${apiPath}`;
+}
+
+/** An image source that carries the session, for platforms whose <Image> can send headers (native). */
+export function authedImageSource(apiPath: string): { uri: string; headers: Record<string, string> } {
+  const token = tokens.getAccessToken();
+  return { uri: absoluteApiUrl(apiPath), headers: token ? { Authorization: `Bearer ${token}` } : {} };
 }

@@ -6,6 +6,7 @@ import { Text } from '@/components/ui/text';
 import { formatCents } from '@/lib/money';
 import { useTheme } from '@/theme/theme-provider';
 import { fonts, radius, space } from '@/theme/tokens';
+import { PhotoImage } from './photo-image';
 
 const STATUS_LABEL = { kept: 'kept', traded: 'traded', sold: 'sold', spent: 'spent back' } as const;
 
@@ -33,6 +34,11 @@ export function KeeperCard({ keeper, onOpen, asRow }: { keeper: KeeperSummary; o
         { borderColor: theme.line, backgroundColor: hovered ? theme.surfaceSunken : asRow ? 'transparent' : theme.surfaceRaised },
       ]}
     >
+      {keeper.thumbUrl ? (
+        <PhotoImage path={keeper.thumbUrl} label="Front photo" style={asRow ? styles.thumbRow : styles.thumbCard} testID={`keeper-thumb-${keeper.digits}`} />
+      ) : asRow ? (
+        <View style={[styles.thumbRow, styles.noThumb, { borderColor: theme.line }]} />
+      ) : null}
       <View style={asRow ? styles.serialCol : undefined}>
         <Text style={[styles.serial, { color: keeper.patterns.length ? theme.hit : theme.ink }]}>{keeperTitle(keeper)}</Text>
         <Text variant="caption" tone="muted">
@@ -59,6 +65,10 @@ const styles = StyleSheet.create({
   card: { borderWidth: 1, borderRadius: radius.lg, padding: space.lg, gap: space.sm },
   row: { flexDirection: 'row', alignItems: 'center', gap: space.lg, paddingVertical: space.md, paddingHorizontal: space.sm, borderBottomWidth: 1, borderRadius: radius.sm },
   serialCol: { width: 240, gap: 2 },
+  // Thumbnails keep a note's proportions (about 2.35 : 1).
+  thumbRow: { width: 80, height: 34, borderRadius: radius.sm },
+  thumbCard: { width: 120, height: 51, borderRadius: radius.sm },
+  noThumb: { borderWidth: 1, borderStyle: 'dashed' },
   patternsCol: { flex: 1 },
   serial: { fontFamily: fonts.monoMedium, fontSize: 20, fontVariant: ['tabular-nums'] },
   badges: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },

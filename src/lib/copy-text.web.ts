@@ -1,0 +1,9 @@
+/** Puts text on the clipboard; false when the browser refuses (no permission, insecure page). */
+export async function copyText(text: string): Promise<boolean> {
+  try {
+    await navigator.clipboard.writeText(text);
+    return true;
+  } catch {
+    return false;
+  }
+}
