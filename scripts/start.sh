@@ -21,12 +21,16 @@ export DATABASE_URL="${DATABASE_URL:-$(database_url strapsift)}"
 export PORT="${PORT:-8080}" HOST="${HOST:-127.0.0.1}"
 export NODE_ENV="${NODE_ENV:-development}"
 run_migrations
+# The fakes first: the demo seed stores its drawn keeper photos in the object store.
+node_modules/.bin/tsx scripts/fakes.ts &
+PIDS+=($!)
+for _ in $(seq 1 100); do
+  curl -fs "http://127.0.0.1:${INBOX_PORT:-8025}/" >/dev/null 2>&1 && break
+  sleep 0.1
+done
 say "seeding demo data"
 node_modules/.bin/tsx server/db/seed/run-seed.ts || die "seeding failed"
 ensure_web_export
-
-node_modules/.bin/tsx scripts/fakes.ts &
-PIDS+=($!)
 
 node --import tsx server/main.ts &
 SERVER_PID=$!

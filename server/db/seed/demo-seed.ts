@@ -5,6 +5,7 @@ import type { ScanInput } from '../../../shared/contracts/scans';
 import type { WeightTableValues } from '../../../shared/contracts/weights';
 import { hashPassword } from '../../features/auth/passwords';
 import { InMemoryResetOutbox } from '../../features/auth/reset-mailer';
+import { drawDemoNote } from './demo-photos';
 import { storedReading } from '../../features/scans/scan-reading';
 import { UserEntity, type UserRole } from '../../features/users/user.entity';
 import { createServices } from '../../services';
@@ -187,6 +188,25 @@ export async function seedDemo(dataSource: DataSource): Promise<{ created: strin
     if (exists.length) continue;
     await services.keepers.create(me, keeper);
     created.push(`keeper ${keeper.serial}`);
+  }
+
+  // Photos for the three best keepers, drawn here; they go to the object store like any upload.
+  const best: Array<{ id: string; digits: string }> = await dataSource.query(
+    `SELECT k.id, k.digits FROM keepers k WHERE k.user_id = $1 ORDER BY k.points DESC, k.digits LIMIT 3`,
+    [me],
+  );
+  try {
+    for (const keeper of best) {
+      const sides: Array<{ side: 'front' | 'back' }> = await dataSource.query(`SELECT side FROM photos WHERE keeper_id = $1`, [keeper.id]);
+      for (const side of ['front', 'back'] as const) {
+        if (sides.some((row) => row.side === side)) continue;
+        await services.photos.upload(me, keeper.id, side, drawDemoNote(keeper.digits, side));
+        created.push(`${side} photo of ${keeper.digits}`);
+      }
+    }
+  } catch (error) {
+    // Without the object store (scripts/fakes.ts) the rest of the demo still stands; photos come next run.
+    console.error(`demo photos skipped: the object store did not answer (${(error as Error).message})`);
   }
   return { created };
 }
