@@ -10,6 +10,9 @@ import { strapSheet } from '../../shared/contracts/straps';
 import { DEMO_ADMIN, DEMO_COLLECTOR, DEMO_CREW } from '../../server/db/seed/demo-accounts';
 import { DEMO_HUNTS } from '../../server/db/seed/demo-data';
 import { seedDemo } from '../../server/db/seed/demo-seed';
+import { config } from '../../server/config';
+import { createObjectStore } from '../../server/lib/object-store';
+import sharp from 'sharp';
 import { openTestApi, type TestApi } from '../support/api';
 
 let api: TestApi;
@@ -45,6 +48,21 @@ describe('the demo seed', () => {
     expect(first.created.length).toBeGreaterThan(5);
     expect(second.created).toEqual([]);
     expect(await tableCounts()).toEqual(afterFirst);
+  });
+
+  it('when seeded, then the three best keepers have drawn front and back photos in the object store', async () => {
+    await seedDemo(api.dataSource);
+    const [demo] = await api.dataSource.query('SELECT id FROM users WHERE email = $1', [DEMO_COLLECTOR.email]);
+    const rows: Array<{ keeper_id: string; object_key: string }> = await api.dataSource.query(
+      'SELECT keeper_id, object_key FROM photos WHERE user_id = $1 ORDER BY keeper_id, side',
+      [demo.id],
+    );
+
+    expect(rows).toHaveLength(6);
+    expect(new Set(rows.map((row) => row.keeper_id)).size).toBe(3);
+    const object = await createObjectStore(config()).get(rows[0]!.object_key);
+    expect(object?.contentType).toBe('image/png');
+    expect((await sharp(object!.body).metadata()).width).toBe(940);
   });
 
   it('when the collector signs in, then they find several hunts from the credit union with a few thousand notes, open and closed', async () => {

@@ -236,23 +236,3 @@ describe('DELETE photos, keepers and accounts', () => {
     expect(await store.list(`users/${staying.id}/`)).toHaveLength(2);
   });
 });
-
-describe('demo photos', () => {
-  it('when the demo is seeded, then its three best keepers have drawn front and back photos in the object store, once', async () => {
-    const { seedDemo } = await import('../../server/db/seed/demo-seed');
-    await seedDemo(api.dataSource);
-    const again = await seedDemo(api.dataSource);
-
-    const [demo] = await api.dataSource.query(`SELECT id FROM users WHERE email = 'demo@strapsift.test'`);
-    const rows: Array<{ keeper_id: string; side: string; object_key: string }> = await api.dataSource.query(
-      'SELECT keeper_id, side, object_key FROM photos WHERE user_id = $1 ORDER BY keeper_id, side',
-      [demo.id],
-    );
-    expect(again.created).toEqual([]);
-    expect(rows).toHaveLength(6);
-    expect(new Set(rows.map((row) => row.keeper_id)).size).toBe(3);
-    const object = await store.get(rows[0]!.object_key);
-    expect(object?.contentType).toBe('image/png');
-    expect((await sharp(object!.body).metadata()).width).toBe(940);
-  });
-});
