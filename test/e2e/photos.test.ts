@@ -124,7 +124,23 @@ describe('Invitations and the data card', () => {
       body: JSON.stringify({ title: 'Invite test box', source: 'Larkspur Valley Credit Union', denomination: 1, plannedStraps: 2 }),
     });
     const invitee = `e2e-invitee-${randomUUID().slice(0, 8)}@strapsift.test`;
-    expect((await owner.call(`/hunts/${hunt.body.id}/invites`, { method: 'POST', body: JSON.stringify({ email: invitee }) })).status).toBe(201);
+    // The owner sends the invitation from the hunt page.
+    const ownerBrowser = await openBrowser(WIDE);
+    try {
+      const { page } = ownerBrowser;
+      await signInAsDemo(page, { email: owner.email, password: owner.password });
+      await page.goto(`${baseUrl()}/hunts/${hunt.body.id}`);
+      await page.getByTestId('invite-email').fill('not an address');
+      await page.getByTestId('invite-send').click();
+      await page.getByText(/Invite by e-mail.*must be an e-mail address/).waitFor();
+      await page.getByTestId('invite-email').fill(invitee);
+      await page.getByTestId('invite-send').click();
+      await page.getByText(`Invitation sent to ${invitee}. The link works once, for 14 days.`).waitFor();
+      await page.getByRole('listitem').filter({ hasText: invitee }).waitFor();
+      await page.getByTestId('crew-section').screenshot({ path: 'test-results/screenshots/hunt-invite-wide.png' });
+    } finally {
+      await ownerBrowser.close();
+    }
     const mail = await waitForMail(invitee, /invites you/);
     const link = /(http:\/\/\S+\/invite\/[A-Za-z0-9_-]{43})/.exec(mail.text ?? '')![1]!;
     expect(link.startsWith(baseUrl())).toBe(true);
