@@ -1,6 +1,6 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
-import { logger } from './logger';
+import { logger, scrubUrl } from './logger';
 
 export type FieldErrors = Record<string, string>;
 
@@ -65,6 +65,6 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
     res.status(failure.status).json({ error: { code, message } });
     return;
   }
-  logger.error({ err, method: req.method, url: req.originalUrl }, 'unhandled error');
+  logger.error({ err, method: req.method, url: scrubUrl(req.originalUrl) }, 'unhandled error');
   res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side; nothing you sent was lost' } });
 };

@@ -19,12 +19,13 @@ export const logger = pino({
 });
 
 /**
- * An address as it may be logged: the secret part of share, invitation and reset links replaced, and
- * no query string at all (tokens travel there too).
+ * An address as it may be logged: the secret part of share and invitation links replaced, and the value
+ * of any `token` in the query string (reset links) too.
  *
  * scrubUrl('/api/share/abc…/photos/1') → '/api/share/[redacted]/photos/1'
  */
 export function scrubUrl(url: string): string {
-  const [path = ''] = url.split('?');
-  return path.replace(/\/(share|invite|invites)\/[^/]+/g, '/$1/[redacted]') + (url.includes('?') ? '?[redacted]' : '');
+  const [path = '', query] = url.split(/\?(.*)/s, 2);
+  const safePath = path.replace(/\/(share|invite|invites)\/[^/]+/g, '/$1/[redacted]');
+  return query === undefined ? safePath : `${safePath}?${query.replace(/(^|&)(token|refreshToken)=[^&]*/gi, '$1$2=[redacted]')}`;
 }

@@ -112,7 +112,8 @@ describe('share links', () => {
     expect(scrubUrl(`/api/share/${token}/photos/1`)).toBe('/api/share/[redacted]/photos/1');
     expect(scrubUrl(`/share/${token}`)).toBe('/share/[redacted]');
     expect(scrubUrl(`/api/invites/${token}/accept`)).toBe('/api/invites/[redacted]/accept');
-    expect(scrubUrl(`/reset-password?token=${token}`)).toBe('/reset-password?[redacted]');
-    expect(scrubUrl('/api/keepers?limit=5')).toBe('/api/keepers?[redacted]');
+    expect(scrubUrl(`/reset-password?token=${token}`)).toBe('/reset-password?token=[redacted]');
+    expect(scrubUrl(`/x?a=1&token=${token}&b=2`)).toBe('/x?a=1&token=[redacted]&b=2');
+    expect(scrubUrl('/api/keepers?limit=5')).toBe('/api/keepers?limit=5');
   });
 });
