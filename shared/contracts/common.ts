@@ -57,3 +57,17 @@ export const serialDigits = z.string().regex(/^\d{8}$/);
 
 /** A serial as a hunter types or pastes it; the engine decides whether it is one. */
 export const serialText = z.string().trim().min(1, 'is required').max(40, 'must be at most 40 characters');
+
+/** Series as printed on a note: a year, optionally with a letter (2013, 1988A). */
+export const seriesField = z
+  .string()
+  .trim()
+  .toUpperCase()
+  .regex(/^\d{4}[A-Z]?$/, 'must be a series like 2013 or 1988A');
+
+/** A Federal Reserve district letter, A–L. */
+export const districtField = z
+  .string()
+  .trim()
+  .toUpperCase()
+  .regex(/^[A-L]$/, 'must be a district letter A–L');

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { cursorQuery, denomination, isoDateTime, page, patternId, serialDigits, serialText, uuid } from './common';
+import { cursorQuery, denomination, isoDateTime, page, patternId, serialDigits, serialText, uuid, districtField, seriesField } from './common';
 import { photoView } from './photos';
 import { readingSchema } from './reading';
 
@@ -11,20 +11,8 @@ export const facility = z.enum(['DC', 'FW'], { message: 'must be DC (Washington)
 /** Fields a hunter fills in for a kept note; all optional, null clears one. */
 const keeperFields = {
   /** Series as printed: a year, optionally with a letter (2013, 1988A). */
-  series: z
-    .string()
-    .trim()
-    .toUpperCase()
-    .regex(/^\d{4}[A-Z]?$/, 'must be a series like 2013 or 1988A')
-    .nullable()
-    .optional(),
-  district: z
-    .string()
-    .trim()
-    .toUpperCase()
-    .regex(/^[A-L]$/, 'must be a district letter A–L')
-    .nullable()
-    .optional(),
+  series: seriesField.nullable().optional(),
+  district: districtField.nullable().optional(),
   facility: facility.nullable().optional(),
   star: z.boolean().optional(),
   denomination: denomination.nullable().optional(),

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { isoDateTime, serialText, uuid } from './common';
+import { isoDateTime, serialText, uuid, districtField, seriesField } from './common';
 
 /** The CSV files an export offers, one per kind of record; `GET /api/export/json` holds them all. */
 export const exportKind = z.enum(['hunts', 'scans', 'keepers'], { message: 'must be hunts, scans or keepers' });
@@ -30,20 +30,8 @@ export const importRow = z
     serial: serialText,
     date: isoDateTime.nullable().optional(),
     strap: strap.nullable().optional(),
-    series: z
-      .string()
-      .trim()
-      .toUpperCase()
-      .regex(/^\d{4}[A-Z]?$/, 'must be a series like 2013 or 1988A')
-      .nullable()
-      .optional(),
-    district: z
-      .string()
-      .trim()
-      .toUpperCase()
-      .regex(/^[A-L]$/, 'must be a district letter A–L')
-      .nullable()
-      .optional(),
+    series: seriesField.nullable().optional(),
+    district: districtField.nullable().optional(),
     star: z.boolean().nullable().optional(),
     pulled: z.boolean().nullable().optional(),
     note: z.string().max(2000, 'must be at most 2,000 characters').nullable().optional(),

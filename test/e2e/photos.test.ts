@@ -3,28 +3,12 @@ import { randomUUID } from 'node:crypto';
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { apiAs } from '../support/api-client';
-import { PHONE, WIDE, baseUrl, openBrowser, signInAsDemo } from '../support/browser';
+import { PHONE, WIDE, baseUrl, openBrowser, signInAsDemo, shootWhole } from '../support/browser';
 import { drawPng } from '../support/images';
 import { waitForMail } from '../support/mail';
 
 mkdirSync('test-results/screenshots', { recursive: true });
 
-/** The page scrolls inside react-native-web's ScrollView; the window is made as tall as the content for the shot. */
-async function shootWhole(page: Page, path: string): Promise<void> {
-  const viewport = page.viewportSize()!;
-  const extra = await page.evaluate(() =>
-    Math.max(
-      0,
-      ...Array.from(document.querySelectorAll('div'))
-        .filter((el) => /(auto|scroll)/.test(getComputedStyle(el).overflowY) && el.clientHeight > 0)
-        .map((el) => el.scrollHeight - el.clientHeight),
-    ),
-  );
-  await page.setViewportSize({ width: viewport.width, height: Math.min(viewport.height + extra, 8000) });
-  await page.waitForTimeout(200);
-  await page.screenshot({ path });
-  await page.setViewportSize(viewport);
-}
 
 /** A fresh collector with one keeper, made through the served app's API. */
 async function collectorWithKeeper(label: string) {

@@ -1,31 +1,11 @@
 import { randomUUID } from 'node:crypto';
 import { mkdirSync } from 'node:fs';
-import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { apiAs } from '../support/api-client';
-import { PHONE, WIDE, openBrowser, signInAsDemo } from '../support/browser';
+import { PHONE, WIDE, openBrowser, signInAsDemo, shootWhole } from '../support/browser';
 
 mkdirSync('test-results/screenshots', { recursive: true });
 
-/**
- * The page scrolls inside react-native-web's ScrollView, not the document, so Playwright's fullPage
- * sees one screen. The window is made as tall as the scrolled content for the shot, then put back.
- */
-async function shootWhole(page: Page, path: string): Promise<void> {
-  const viewport = page.viewportSize()!;
-  const extra = await page.evaluate(() =>
-    Math.max(
-      0,
-      ...Array.from(document.querySelectorAll('div'))
-        .filter((el) => /(auto|scroll)/.test(getComputedStyle(el).overflowY) && el.clientHeight > 0)
-        .map((el) => el.scrollHeight - el.clientHeight),
-    ),
-  );
-  await page.setViewportSize({ width: viewport.width, height: Math.min(viewport.height + extra, 8000) });
-  await page.waitForTimeout(150);
-  await page.screenshot({ path });
-  await page.setViewportSize(viewport);
-}
 
 interface Tally {
   notes: number;

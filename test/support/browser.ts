@@ -58,3 +58,23 @@ export async function signInAsDemo(page: Page, account = { email: 'demo@strapsif
   await page.getByTestId('sign-in-submit').click();
   await page.waitForURL(/\/sift/);
 }
+
+/**
+ * The page scrolls inside react-native-web's ScrollView, not the document, so Playwright's fullPage
+ * sees one screen. The window is made as tall as the scrolled content for the shot, then put back.
+ */
+export async function shootWhole(page: Page, path: string): Promise<void> {
+  const viewport = page.viewportSize()!;
+  const extra = await page.evaluate(() =>
+    Math.max(
+      0,
+      ...Array.from(document.querySelectorAll('div'))
+        .filter((el) => /(auto|scroll)/.test(getComputedStyle(el).overflowY) && el.clientHeight > 0)
+        .map((el) => el.scrollHeight - el.clientHeight),
+    ),
+  );
+  await page.setViewportSize({ width: viewport.width, height: Math.min(viewport.height + extra, 8000) });
+  await page.waitForTimeout(150);
+  await page.screenshot({ path });
+  await page.setViewportSize(viewport);
+}
