@@ -30,6 +30,15 @@ const STATUSES: { value: '' | KeeperStatus; label: string }[] = [
   { value: 'sold', label: 'Sold' },
   { value: 'spent', label: 'Spent back' },
 ];
+type GradeBand = '' | 'ungraded' | 'low' | 'mid' | 'unc';
+const GRADE_BANDS: { value: GradeBand; label: string; test: (grade: number | null) => boolean }[] = [
+  { value: '', label: 'Any', test: () => true },
+  { value: 'ungraded', label: 'Ungraded', test: (grade) => grade == null },
+  { value: 'low', label: '1–39', test: (grade) => grade != null && grade < 40 },
+  { value: 'mid', label: '40–59', test: (grade) => grade != null && grade >= 40 && grade < 60 },
+  { value: 'unc', label: 'Unc 60–70', test: (grade) => grade != null && grade >= 60 },
+];
+
 const PATTERN_FILTERS: { value: '' | PatternId | 'star'; label: string }[] = [
   { value: '', label: 'Any' },
   { value: 'star', label: '★ star' },
@@ -51,6 +60,7 @@ export function KeepersScreen() {
   const [sort, setSort] = useState<KeeperSort>('newest');
   const [status, setStatus] = useState<'' | KeeperStatus>('');
   const [pattern, setPattern] = useState<'' | PatternId | 'star'>('');
+  const [grade, setGrade] = useState<GradeBand>('');
   const [showFilters, setShowFilters] = useState(false);
   const query = useDebounced(search, 250);
 
@@ -62,11 +72,14 @@ export function KeepersScreen() {
     (path: string) => api(path, { schema: keeperList }),
   );
   const all = useMemo(() => (pages.data ?? []).flatMap((page) => page.items), [pages.data]);
-  // Pattern and star narrow the loaded list on the device; search, sort and status run on the server.
-  const shown = useMemo(
-    () => all.filter((keeper) => (pattern === '' ? true : pattern === 'star' ? keeper.star : keeper.patterns.includes(pattern))),
-    [all, pattern],
-  );
+  // Pattern, star and grade narrow the loaded list on the device; search (serial, series, district,
+  // notes), sort and status run on the server.
+  const shown = useMemo(() => {
+    const band = GRADE_BANDS.find((item) => item.value === grade) ?? GRADE_BANDS[0];
+    return all.filter(
+      (keeper) => (pattern === '' ? true : pattern === 'star' ? keeper.star : keeper.patterns.includes(pattern)) && band.test(keeper.grade),
+    );
+  }, [all, pattern, grade]);
   const last = pages.data?.[pages.data.length - 1];
 
   return (
@@ -77,7 +90,7 @@ export function KeepersScreen() {
     >
       <View style={[styles.controls, isWide && styles.controlsWide]}>
         <View style={styles.search}>
-          <Field label="Search" value={search} onChangeText={setSearch} placeholder="serial, series, district or notes" autoCapitalize="none" testID="keeper-search" />
+          <Field label="Search" value={search} onChangeText={setSearch} placeholder="serial, series (2017A), district letter or notes" autoCapitalize="none" testID="keeper-search" />
         </View>
         <ChoiceRow label="Sort by" options={SORTS} value={sort} onChange={(value) => setSort(value as KeeperSort)} />
       </View>
@@ -88,6 +101,7 @@ export function KeepersScreen() {
         <View style={styles.filters}>
           <ChoiceRow label="Status" options={STATUSES} value={status} onChange={(value) => setStatus(value as '' | KeeperStatus)} />
           <ChoiceRow label="Pattern" options={PATTERN_FILTERS} value={pattern} onChange={(value) => setPattern(value as '' | PatternId | 'star')} />
+          <ChoiceRow label="Grade" options={GRADE_BANDS} value={grade} onChange={(value) => setGrade(value as GradeBand)} />
         </View>
       ) : null}
 
