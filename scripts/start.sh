@@ -20,6 +20,9 @@ ensure_database strapsift
 export DATABASE_URL="${DATABASE_URL:-$(database_url strapsift)}"
 export PORT="${PORT:-8080}" HOST="${HOST:-127.0.0.1}"
 export NODE_ENV="${NODE_ENV:-development}"
+# The fakes and the server agree on ports: S3_PORT, SMTP_PORT and INBOX_PORT move both.
+export S3_PORT="${S3_PORT:-4569}" SMTP_PORT="${SMTP_PORT:-2525}" INBOX_PORT="${INBOX_PORT:-8025}"
+export S3_ENDPOINT="${S3_ENDPOINT:-http://127.0.0.1:$S3_PORT}" SMTP_HOST="${SMTP_HOST:-127.0.0.1}"
 run_migrations
 # The fakes first: the demo seed stores its drawn keeper photos in the object store.
 node_modules/.bin/tsx scripts/fakes.ts &

@@ -67,7 +67,9 @@ export function createApp({ dataSource, webDist, resetMailer, mailer, objectStor
       autoLogging: { ignore: (req) => req.url === '/api/health' },
       // Share, invitation and reset links carry their secret in the address: it never reaches a log line.
       serializers: {
-        req: (req: { url?: string; query?: unknown; params?: unknown } & Record<string, unknown>) => ({ ...req, url: scrubUrl(req.url ?? ''), query: undefined, params: undefined }),
+        // One short line a request: method, scrubbed address and status; headers stay out of the log.
+        req: (req: { id?: unknown; method?: string; url?: string }) => ({ id: req.id, method: req.method, url: scrubUrl(req.url ?? '') }),
+        res: (res: { statusCode?: number }) => ({ statusCode: res.statusCode }),
       },
     }),
   );
