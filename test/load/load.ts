@@ -6,11 +6,11 @@
  */
 import autocannon from 'autocannon';
 import { randomUUID } from 'node:crypto';
-import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import { resolve } from 'node:path';
 import { createDataSource } from '../../server/db/data-source';
 import { ApiProcess } from '../support/fault-rig';
+import { writeDocSection } from '../support/doc-section';
 import { runFaultScenario, type FaultOutcome } from '../support/fault-scenario';
 
 const root = resolve(__dirname, '../..');
@@ -209,19 +209,6 @@ async function pacedHunters(
 
 const ms = (n: number) => `${n.toFixed(1)} ms`;
 
-function replaceSection(file: string, heading: string, body: string): void {
-  const path = resolve(root, file);
-  const text = existsSync(path) ? readFileSync(path, 'utf8') : `# ${file.replace(/^docs\//, '').replace('.md', '')}\n`;
-  const start = text.indexOf(`\n${heading}\n`);
-  let next: string;
-  if (start === -1) next = `${text.trimEnd()}\n\n${heading}\n${body}`;
-  else {
-    const after = text.indexOf('\n## ', start + heading.length + 1);
-    next = `${text.slice(0, start)}\n${heading}\n${body}${after === -1 ? '' : text.slice(after)}`;
-  }
-  writeFileSync(path, `${next.trimEnd()}\n`);
-}
-
 async function main(): Promise<void> {
   const machine = `${os.cpus().length} × ${os.cpus()[0]?.model ?? 'cpu'}, Node ${process.version}, load average ${os.loadavg()[0].toFixed(1)} at start`;
   console.error(`load: ${HUNTERS} hunters for ${seconds} s against 127.0.0.1 …`);
@@ -238,10 +225,10 @@ async function main(): Promise<void> {
   const rows = Object.entries(load.byKind)
     .map(([kind, f]) => `| ${kind} | ${f.count.toLocaleString('en-US')} | ${ms(f.p50)} | ${ms(f.p95)} | ${ms(f.p99)} |`)
     .join('\n');
-  replaceSection(
-    'docs/PERFORMANCE.md',
-    '## Load',
+  writeDocSection(
+    resolve(root, 'docs/PERFORMANCE.md'),
     [
+      '## Load',
       '',
       `Measured ${date} by \`npm run load\` (test/load/load.ts) against the API process on 127.0.0.1 (${machine}); the load generator shares the 2 cores with the server and PostgreSQL. ${HUNTERS} simulated hunters each send a request every ${(1000 / RATE_PER_HUNTER).toFixed(0)} ms for ${load.seconds} s (${HUNTERS * RATE_PER_HUNTER} a second offered, several times what hunters sifting at keypad speed send), cycling through a batch of 20 new notes, the hunt list, their hunt's tally and its strap sheet; each request is timed from send to last byte.`,
       '',
@@ -257,16 +244,18 @@ async function main(): Promise<void> {
       'A batch is 20 new notes; hunts is the hunt list; tally and straps are the hunter’s own hunt.',
       '',
     ].join('\n'),
+    'Performance',
   );
   if (faults) {
-    replaceSection(
-      'docs/RELIABILITY.md',
-      '## Measured by npm run load',
+    writeDocSection(
+      resolve(root, 'docs/RELIABILITY.md'),
       [
+        '## Measured by npm run load',
         '',
         `${date}: ${faults.clients} simulated hunters sent ${faults.sent.toLocaleString('en-US')} notes through the app's own offline queue while the API process was killed ${faults.apiRestarts} times and PostgreSQL restarted ${faults.databaseRestarts} time. Stored ${faults.stored.toLocaleString('en-US')}, distinct ${faults.distinct.toLocaleString('en-US')}: ${faults.lost} lost, ${faults.doubled} doubled. ${faults.failedCalls} upload calls failed during the crashes and were retried. Run time ${faults.seconds.toFixed(1)} s.`,
         '',
       ].join('\n'),
+      'Reliability',
     );
   }
 }

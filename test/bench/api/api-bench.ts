@@ -9,11 +9,11 @@
  * The database is dropped at the end.
  */
 import { randomUUID } from 'node:crypto';
-import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import type { AddressInfo } from 'node:net';
 import os from 'node:os';
 import { join, resolve } from 'node:path';
 import { DataSource } from 'typeorm';
+import { writeDocSection } from '../../support/doc-section';
 
 // The logger reads these when it is first imported, so they are set before the app is loaded.
 process.env.LOG_LEVEL = 'silent';
@@ -181,17 +181,7 @@ async function main(): Promise<void> {
       'over the hunt’s rows through the `scans (hunt_id, scanned_at, id)` index.',
       '',
     ].join('\n');
-    const existing = existsSync(docPath) ? readFileSync(docPath, 'utf8') : '# Performance\n';
-    const start = existing.search(/^## API\s*$/m);
-    let next: string;
-    if (start < 0) {
-      next = `${existing.trimEnd()}\n\n${section}`;
-    } else {
-      const rest = existing.slice(start + 1);
-      const end = rest.search(/^## /m);
-      next = existing.slice(0, start) + section + (end < 0 ? '' : `\n${rest.slice(end)}`);
-    }
-    writeFileSync(docPath, next.endsWith('\n') ? next : `${next}\n`);
+    writeDocSection(docPath, section, 'Performance');
     process.stdout.write(`Wrote the API section of ${docPath}\n`);
   }
   process.exitCode = failed.length === 0 ? 0 : 1;

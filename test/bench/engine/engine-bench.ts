@@ -9,12 +9,13 @@
  * named in its row; the machine's load average is recorded beside them.
  */
 import { execFileSync, spawnSync } from 'node:child_process';
-import { existsSync, mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdtempSync, rmSync } from 'node:fs';
 import os from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import v8 from 'node:v8';
 import vm from 'node:vm';
+import { writeDocSection } from '../../support/doc-section';
 import {
   NEIGHBOUR_PATTERN_IDS,
   PATTERN_IDS,
@@ -324,17 +325,7 @@ if (write) {
     'engine\'s half-serial lookup tables in C, a stricter comparison. The census runs only in the bench, never in `npm test`.',
     '',
   ].join('\n');
-  const existing = existsSync(docPath) ? readFileSync(docPath, 'utf8') : '# Performance\n';
-  const start = existing.search(/^## Engine\s*$/m);
-  let next: string;
-  if (start < 0) {
-    next = `${existing.trimEnd()}\n\n${section}`;
-  } else {
-    const rest = existing.slice(start + 1);
-    const end = rest.search(/^## /m);
-    next = existing.slice(0, start) + section + (end < 0 ? '' : `\n${rest.slice(end)}`);
-  }
-  writeFileSync(docPath, next.endsWith('\n') ? next : `${next}\n`);
+  writeDocSection(docPath, section, 'Performance');
   process.stdout.write(`Wrote the Engine section of ${docPath}\n`);
 }
 
