@@ -17,6 +17,7 @@ import { scansRoutes } from './features/scans/scans.routes';
 import { shareRoutes } from './features/share/share.routes';
 import { strapsRoutes } from './features/straps/straps.routes';
 import { tallyRoutes } from './features/tally/tally.routes';
+import { archiveRoutes } from './features/transfer/archive.routes';
 import { transferRoutes } from './features/transfer/transfer.routes';
 import { usersRoutes } from './features/users/users.routes';
 import { watchRoutes } from './features/watch/watch.routes';
@@ -96,6 +97,7 @@ export function createApp({ dataSource, webDist, resetMailer, mailer, objectStor
   api.use(shareRoutes(services.share, authed));
   api.use(keepersRoutes(services.keepers, authed));
   api.use(transferRoutes(services.exporter, services.importer, authed));
+  api.use(archiveRoutes(services.archives.exporter, services.archives.importer, authed));
   api.use(weightsRoutes(services.weights, authed));
   api.use(watchRoutes(services.watch, authed));
   api.use(adminRoutes(services.admin, authed));

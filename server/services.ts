@@ -15,6 +15,8 @@ import { ScansService } from './features/scans/scans.service';
 import { ShareService } from './features/share/share.service';
 import { StrapsService } from './features/straps/straps.service';
 import { TallyService } from './features/tally/tally.service';
+import { ArchiveExportService } from './features/transfer/archive-export.service';
+import { ArchiveImportService } from './features/transfer/archive-import.service';
 import { ExportService } from './features/transfer/export.service';
 import { ImportService } from './features/transfer/import.service';
 import { UsersService } from './features/users/users.service';
@@ -56,6 +58,7 @@ export function createServices(dataSource: DataSource, options: ServiceOptions =
   const huntSummary = new HuntSummaryService(dataSource, hunts, tally, mailer, publicUrl);
   const exporter = new ExportService(dataSource);
   const importer = new ImportService(dataSource, scans, keepers);
+  const archives = { exporter: new ArchiveExportService(dataSource, objectStore), importer: new ArchiveImportService(dataSource, objectStore) };
 
   // Every new account starts with the engine's default weight table, active.
   auth.onRegister((user) => weights.ensureDefault(user.id));
@@ -87,6 +90,7 @@ export function createServices(dataSource: DataSource, options: ServiceOptions =
     share,
     exporter,
     importer,
+    archives,
     watch,
     admin,
   };

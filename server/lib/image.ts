@@ -1,4 +1,4 @@
-import sharp from 'sharp';
+import sharp, { type Sharp } from 'sharp';
 import type { PhotoContentType } from '../../shared/contracts/photos';
 import { HttpError } from './errors';
 
@@ -30,6 +30,35 @@ export const THUMB_SIDE = 320;
 /** Refuse decompression bombs: a 10 MB file may claim a gigapixel canvas. */
 const MAX_INPUT_PIXELS = 60_000_000;
 
+/** The small JPEG lists and share pages show, from a photo already turned upright. */
+function thumbnail(image: Sharp): Promise<Buffer> {
+  return image.resize({ width: THUMB_SIDE, height: THUMB_SIDE, fit: 'inside', withoutEnlargement: true }).flatten({ background: '#ffffff' }).jpeg({ quality: 78 }).toBuffer();
+}
+
+export interface CheckedImage {
+  contentType: PhotoContentType;
+  width: number;
+  height: number;
+  thumb: Buffer;
+}
+
+/**
+ * For photos that were prepared once already (a restored archive): checks the bytes decode as the image
+ * their first bytes claim and makes the thumbnail, leaving the photo's own bytes as they are.
+ */
+export async function checkStoredImage(bytes: Buffer): Promise<CheckedImage | null> {
+  const contentType = sniffImageType(bytes);
+  if (!contentType) return null;
+  try {
+    const image = sharp(bytes, { limitInputPixels: MAX_INPUT_PIXELS, failOn: 'error' });
+    const { width, height } = await image.metadata();
+    if (!width || !height) return null;
+    return { contentType, width, height, thumb: await thumbnail(image.clone()) };
+  } catch {
+    return null;
+  }
+}
+
 /**
  * Checks the bytes really are a JPEG, PNG or WebP and prepares what is stored: the photo turned upright
  * by its EXIF orientation and re-encoded in its own format without metadata (no camera, time or GPS
@@ -48,12 +77,7 @@ export async function preparePhoto(bytes: Buffer): Promise<PreparedPhoto> {
           ? resized.png({ compressionLevel: 9 })
           : resized.webp({ quality: 90 });
     const { data: body, info } = await encoded.toBuffer({ resolveWithObject: true });
-    const thumb = await source
-      .clone()
-      .resize({ width: THUMB_SIDE, height: THUMB_SIDE, fit: 'inside', withoutEnlargement: true })
-      .flatten({ background: '#ffffff' })
-      .jpeg({ quality: 78 })
-      .toBuffer();
+    const thumb = await thumbnail(source.clone());
     return { contentType, body, width: info.width, height: info.height, thumb };
   } catch (error) {
     if (error instanceof HttpError) throw error;
