@@ -71,12 +71,17 @@ const KEEPERS: Keyset = {
   key: (row) => [row.found_at, row.id as string],
 };
 
+// Paged by keeper, so a keeper's front and back never fall on two pages; front before back.
 const PHOTOS: Keyset = {
-  sql: `SELECT p.id, p.keeper_id, p.side, p.content_type, p.object_key, p.width, p.height, k.found_at
-          FROM photos p JOIN keepers k ON k.id = p.keeper_id
-         WHERE p.user_id = $1 AND (k.found_at, p.id) > ($2::timestamptz, $3::uuid)
-         ORDER BY k.found_at, p.id LIMIT $4`,
-  key: (row) => [row.found_at, row.id as string],
+  sql: `WITH page AS (
+          SELECT k.id, k.found_at FROM keepers k
+           WHERE k.user_id = $1 AND EXISTS (SELECT 1 FROM photos p WHERE p.keeper_id = k.id)
+             AND (k.found_at, k.id) > ($2::timestamptz, $3::uuid)
+           ORDER BY k.found_at, k.id LIMIT $4)
+        SELECT p.id, p.keeper_id, p.side, p.content_type, p.object_key, p.width, p.height, page.found_at
+          FROM page JOIN photos p ON p.keeper_id = page.id
+         ORDER BY page.found_at, page.id, p.side DESC`,
+  key: (row) => [row.found_at, row.keeper_id as string],
 };
 
 const toHunt = (row: Row): ArchiveHunt => ({
