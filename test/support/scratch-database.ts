@@ -1,4 +1,4 @@
-import { Client } from 'pg';
+import { withConnection } from '../../scripts/backup/plain-connection';
 import { testDatabaseUrl } from './database';
 
 /** A database of its own for a test that deletes accounts or drops whole databases, beside the shared one. */
@@ -8,28 +8,22 @@ export function scratchDatabaseUrl(suffix: string): string {
   return url.toString();
 }
 
-async function admin<T>(run: (client: Client) => Promise<T>): Promise<T> {
+function adminUrl(): string {
   const url = new URL(testDatabaseUrl());
   url.pathname = '/postgres';
-  const client = new Client({ connectionString: url.toString() });
-  await client.connect();
-  try {
-    return await run(client);
-  } finally {
-    await client.end();
-  }
+  return url.toString();
 }
 
 const nameOf = (url: string) => new URL(url).pathname.slice(1);
 
 export async function dropDatabase(url: string): Promise<void> {
-  await admin((client) => client.query(`DROP DATABASE IF EXISTS "${nameOf(url)}" WITH (FORCE)`));
+  await withConnection(adminUrl(), (query) => query(`DROP DATABASE IF EXISTS "${nameOf(url)}" WITH (FORCE)`));
 }
 
 /** Drops and creates an empty database; answers its URL. */
 export async function freshDatabase(suffix: string): Promise<string> {
   const url = scratchDatabaseUrl(suffix);
   await dropDatabase(url);
-  await admin((client) => client.query(`CREATE DATABASE "${nameOf(url)}"`));
+  await withConnection(adminUrl(), (query) => query(`CREATE DATABASE "${nameOf(url)}"`));
   return url;
 }
