@@ -6,8 +6,9 @@ import { mkdir, readdir, rm, stat, writeFile } from 'node:fs/promises';
 import { dirname, join, resolve } from 'node:path';
 import { loadConfig } from '../../server/config';
 import { bucketOf, safeKey } from './bucket';
-import { tableChecksums } from './checksums';
+import { checksumsWith } from './checksums';
 import { DUMP, MANIFEST, OBJECTS, type BackupManifest } from './manifest';
+import { withSnapshot } from './plain-connection';
 import { runTool } from './pg-tools';
 
 const sha256File = (path: string) =>
@@ -25,11 +26,15 @@ async function main(): Promise<void> {
   const folder = join(root, createdAt.toISOString().replace(/[-:]/g, ''));
   await mkdir(join(folder, OBJECTS), { recursive: true });
 
-  // Checksums first, then the dump: on a live server, writes in between would show up as a mismatch in
-  // the restore's check; run backups when the app is quiet, or rely on WAL archiving (docs/OPERATIONS.md).
-  const tables = await tableChecksums(settings.DATABASE_URL);
+  // One snapshot for both the checksums and the dump, so a backup taken while the app is writing still
+  // matches its own manifest. Photo objects are copied after: one uploaded meanwhile is an extra object
+  // nothing points at; one deleted meanwhile is missing (docs/OPERATIONS.md says how to avoid both).
   const dump = join(folder, DUMP);
-  await runTool('pg_dump', ['--format=custom', '--no-owner', '--no-privileges', `--file=${dump}`, `--dbname=${settings.DATABASE_URL}`]);
+  const tables = await withSnapshot(settings.DATABASE_URL, async (snapshot, query) => {
+    const summary = await checksumsWith(query);
+    await runTool('pg_dump', ['--format=custom', '--no-owner', '--no-privileges', `--snapshot=${snapshot}`, `--file=${dump}`, `--dbname=${settings.DATABASE_URL}`]);
+    return summary;
+  });
 
   const bucket = bucketOf(settings);
   const objects: BackupManifest['bucket']['objects'] = [];
