@@ -1,20 +1,10 @@
-import { CreateBucketCommand, DeleteBucketCommand, HeadBucketCommand, S3Client } from '@aws-sdk/client-s3';
-import type { Config } from '../../server/config';
-import { createObjectStore, type ObjectStore } from '../../server/lib/object-store';
-
-type S3Settings = Pick<Config, 'S3_ENDPOINT' | 'S3_REGION' | 'S3_BUCKET' | 'S3_ACCESS_KEY_ID' | 'S3_SECRET_ACCESS_KEY' | 'S3_FORCE_PATH_STYLE'>;
+import { CreateBucketCommand, DeleteBucketCommand, HeadBucketCommand } from '@aws-sdk/client-s3';
+import { createObjectStore, createS3Client, type ObjectStore, type S3Settings } from '../../server/lib/object-store';
 
 /** The photo bucket, through the same SDK and settings as the app, plus the bucket-level calls a restore needs. */
 export function bucketOf(settings: S3Settings): { store: ObjectStore; ensure(): Promise<void>; drop(): Promise<void> } {
   const store = createObjectStore(settings);
-  const client = new S3Client({
-    endpoint: settings.S3_ENDPOINT,
-    region: settings.S3_REGION,
-    forcePathStyle: settings.S3_FORCE_PATH_STYLE === 'true',
-    credentials: { accessKeyId: settings.S3_ACCESS_KEY_ID, secretAccessKey: settings.S3_SECRET_ACCESS_KEY },
-    requestChecksumCalculation: 'WHEN_REQUIRED',
-    responseChecksumValidation: 'WHEN_REQUIRED',
-  });
+  const client = createS3Client(settings);
   const Bucket = settings.S3_BUCKET;
   return {
     store,

@@ -80,11 +80,14 @@ export class S3ObjectStore implements ObjectStore {
   }
 }
 
-export function createObjectStore(settings: Pick<Config, 'S3_ENDPOINT' | 'S3_REGION' | 'S3_BUCKET' | 'S3_ACCESS_KEY_ID' | 'S3_SECRET_ACCESS_KEY' | 'S3_FORCE_PATH_STYLE'>): ObjectStore {
+export type S3Settings = Pick<Config, 'S3_ENDPOINT' | 'S3_REGION' | 'S3_BUCKET' | 'S3_ACCESS_KEY_ID' | 'S3_SECRET_ACCESS_KEY' | 'S3_FORCE_PATH_STYLE'>;
+
+/** The SDK client as the app configures it (also used by the backup scripts for bucket-level calls). */
+export function createS3Client(settings: S3Settings): S3Client {
   // The SDK is pinned to a release that supports Node 20 (see STACK.md); its notice that later releases
   // will not would otherwise open every server log.
   process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED ??= 'true';
-  const client = new S3Client({
+  return new S3Client({
     endpoint: settings.S3_ENDPOINT,
     region: settings.S3_REGION,
     forcePathStyle: settings.S3_FORCE_PATH_STYLE === 'true',
@@ -95,5 +98,8 @@ export function createObjectStore(settings: Pick<Config, 'S3_ENDPOINT' | 'S3_REG
     responseChecksumValidation: 'WHEN_REQUIRED',
     maxAttempts: 3,
   });
-  return new S3ObjectStore(client, settings.S3_BUCKET);
+}
+
+export function createObjectStore(settings: S3Settings): ObjectStore {
+  return new S3ObjectStore(createS3Client(settings), settings.S3_BUCKET);
 }

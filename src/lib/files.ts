@@ -7,4 +7,8 @@ export async function pickTextFile(_accept: string): Promise<{ name: string; tex
   return null;
 }
 
+export async function pickBinaryFile(_accept: string): Promise<File | null> {
+  return null;
+}
+
 export const canPickFiles = false;

@@ -13,26 +13,27 @@ export async function saveFile(fileName: string, blob: Blob): Promise<void> {
 }
 
 /** Opens the browser's file chooser for one text file; null when the visitor cancels. */
-export function pickTextFile(accept: string): Promise<{ name: string; text: string } | null> {
-  return new Promise((resolve, reject) => {
+export async function pickTextFile(accept: string): Promise<{ name: string; text: string } | null> {
+  const file = await pickBinaryFile(accept, 'text-file-input');
+  return file ? { name: file.name, text: await file.text() } : null;
+}
+
+/** Opens the browser's file chooser for one file of any kind (an archive), as the File itself. */
+export function pickBinaryFile(accept: string, testId = 'binary-file-input'): Promise<File | null> {
+  return new Promise((resolve) => {
     const input = document.createElement('input');
     input.type = 'file';
     input.accept = accept;
     input.style.display = 'none';
-    input.setAttribute('data-testid', 'text-file-input');
+    input.setAttribute('data-testid', testId);
     document.body.appendChild(input);
-    const done = () => input.remove();
     input.addEventListener('change', () => {
-      const file = input.files?.[0];
-      done();
-      if (!file) {
-        resolve(null);
-        return;
-      }
-      file.text().then((text) => resolve({ name: file.name, text }), reject);
+      const file = input.files?.[0] ?? null;
+      input.remove();
+      resolve(file);
     });
     input.addEventListener('cancel', () => {
-      done();
+      input.remove();
       resolve(null);
     });
     input.click();

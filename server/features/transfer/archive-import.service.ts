@@ -82,36 +82,30 @@ export class ArchiveImportService {
     const hunts = new Map<string, ResolvedHunt>();
     let tables: ArchiveWeightTable[] = [];
     let watch: ArchiveWatchPattern[] = [];
-    let huntPart: ArchiveHunt[] = [];
-    let notePart: ArchiveNote[] = [];
-    let keeperPart: ArchiveKeeper[] = [];
-    let notesDone = 0;
-    let keepersDone = 0;
     const problems: ProblemView[] = [];
-
-    const flushHunts = async () => {
-      if (huntPart.length === 0) return;
-      const part = huntPart;
-      huntPart = [];
-      counts.hunts.add += await this.dataSource.transaction((manager) => this.insertHunts(manager, userId, part, hunts));
-      await progress({ phase: 'hunts', done: hunts.size, total: counts.hunts.inArchive });
+    /** Records gathered into parts of `size`; each part is written in one transaction, then reported. */
+    const parts = <T>(size: number, phase: 'hunts' | 'notes' | 'keepers', insert: (manager: EntityManager, part: T[]) => Promise<number>) => {
+      let part: T[] = [];
+      let done = 0;
+      const flush = async () => {
+        if (part.length === 0) return;
+        const taken = part;
+        part = [];
+        counts[phase].add += await this.dataSource.transaction((manager) => insert(manager, taken));
+        done += taken.length;
+        await progress({ phase, done, total: counts[phase].inArchive });
+      };
+      return {
+        flush,
+        add: async (item: T) => {
+          part.push(item);
+          if (part.length >= size) await flush();
+        },
+      };
     };
-    const flushNotes = async () => {
-      if (notePart.length === 0) return;
-      const part = notePart;
-      notePart = [];
-      counts.notes.add += await this.dataSource.transaction((manager) => this.insertNotes(manager, userId, part, hunts));
-      notesDone += part.length;
-      await progress({ phase: 'notes', done: notesDone, total: counts.notes.inArchive });
-    };
-    const flushKeepers = async () => {
-      if (keeperPart.length === 0) return;
-      const part = keeperPart;
-      keeperPart = [];
-      counts.keepers.add += await this.dataSource.transaction((manager) => this.insertKeepers(manager, userId, part, hunts));
-      keepersDone += part.length;
-      await progress({ phase: 'keepers', done: keepersDone, total: counts.keepers.inArchive });
-    };
+    const huntParts = parts<ArchiveHunt>(HUNT_PART, 'hunts', (manager, part) => this.insertHunts(manager, userId, part, hunts));
+    const noteParts = parts<ArchiveNote>(NOTE_PART, 'notes', (manager, part) => this.insertNotes(manager, userId, part, hunts));
+    const keeperParts = parts<ArchiveKeeper>(KEEPER_PART, 'keepers', (manager, part) => this.insertKeepers(manager, userId, part, hunts));
 
     await readArchive(
       path,
@@ -125,18 +119,9 @@ export class ArchiveImportService {
         },
         weightTable: (table) => void tables.push(table),
         watchPattern: (pattern) => void watch.push(pattern),
-        hunt: async (hunt) => {
-          huntPart.push(hunt);
-          if (huntPart.length >= HUNT_PART) await flushHunts();
-        },
-        note: async (note) => {
-          notePart.push(note);
-          if (notePart.length >= NOTE_PART) await flushNotes();
-        },
-        keeper: async (keeper) => {
-          keeperPart.push(keeper);
-          if (keeperPart.length >= KEEPER_PART) await flushKeepers();
-        },
+        hunt: huntParts.add,
+        note: noteParts.add,
+        keeper: keeperParts.add,
         sectionEnd: async (section) => {
           if (section === 'weightTables') {
             const part = tables;
@@ -147,9 +132,9 @@ export class ArchiveImportService {
             const part = watch;
             watch = [];
             counts.watchPatterns.add += await this.dataSource.transaction((manager) => this.insertWatch(manager, userId, part));
-          } else if (section === 'hunts') await flushHunts();
-          else if (section === 'notes') await flushNotes();
-          else if (section === 'keepers') await flushKeepers();
+          } else if (section === 'hunts') await huntParts.flush();
+          else if (section === 'notes') await noteParts.flush();
+          else if (section === 'keepers') await keeperParts.flush();
         },
       },
       problems,
@@ -231,6 +216,8 @@ export class ArchiveImportService {
                      $11::varchar[], $12::bool[], $13::int[], $14::float8[], $15::bool[], $16::timestamptz[], $17::varchar[], $18::real[], $19::int[])
            AS t(id, hunt_id, strap, serial, digits, value, prefix, suffix, star, district, pulled, pattern_mask, points, keep, scanned_at,
                 entry_method, camera_confidence, star_run_size)
+        -- As with uploads: no note logged after the close goes into someone else's closed hunt.
+        WHERE NOT EXISTS (SELECT 1 FROM hunts h WHERE h.id = t.hunt_id AND h.owner_id <> $1 AND h.status = 'closed' AND h.closed_at < t.scanned_at)
        ON CONFLICT (id) DO NOTHING
        RETURNING id`,
       [

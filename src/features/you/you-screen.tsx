@@ -14,6 +14,8 @@ import { useThemeState, type ThemePreference } from '@/theme/theme-provider';
 import { useLayout } from '@/theme/use-layout';
 import { space } from '@/theme/tokens';
 import { deleteMe, updateMe } from './api';
+import { ArchiveExportCard } from './components/archive-export-card';
+import { ArchiveRestoreCard } from './components/archive-restore-card';
 import { ExportCard } from './components/export-card';
 import { ImportCard } from './components/import-card';
 
@@ -101,6 +103,8 @@ export function YouScreen() {
 
   const data = (
     <>
+      <ArchiveExportCard />
+      <ArchiveRestoreCard />
       <ExportCard />
       <ImportCard />
     </>

@@ -34,10 +34,12 @@ export interface RequestOptions<T> {
   anonymous?: boolean;
   /** Raw body such as FormData; sent as is. */
   rawBody?: BodyInit;
+  /** What to ask the server for; JSON unless said otherwise. */
+  accept?: string;
 }
 
 async function send(path: string, options: RequestOptions<unknown>, token: string | null): Promise<Response> {
-  const headers: Record<string, string> = { Accept: 'application/json' };
+  const headers: Record<string, string> = { Accept: options.accept ?? 'application/json' };
   if (options.body !== undefined) headers['Content-Type'] = 'application/json';
   if (token && !options.anonymous) headers.Authorization = `Bearer ${token}`;
   try {
@@ -121,4 +123,55 @@ export function absoluteApiUrl(apiPath: string): string {
 export function authedImageSource(apiPath: string): { uri: string; headers: Record<string, string> } {
   const token = tokens.getAccessToken();
   return { uri: absoluteApiUrl(apiPath), headers: token ? { Authorization: `Bearer ${token}` } : {} };
+}
+
+/** Reads a streamed body chunk by chunk, telling `onChunk` about each as it arrives. */
+async function readBody(response: Response, onChunk: (chunk: Uint8Array) => void): Promise<void> {
+  const reader = response.body?.getReader();
+  if (!reader) {
+    onChunk(new Uint8Array(await response.arrayBuffer()));
+    return;
+  }
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) return;
+    if (value) onChunk(value);
+  }
+}
+
+/** Like apiBlob, for large downloads: `onProgress` hears the bytes received so far. */
+export async function apiDownload(path: string, onProgress: (received: number) => void): Promise<Blob> {
+  const response = await sendWithRefresh(path, {});
+  if (!response.ok) throw await failure(response);
+  const parts: Uint8Array[] = [];
+  let received = 0;
+  await readBody(response, (chunk) => {
+    parts.push(chunk);
+    received += chunk.length;
+    onProgress(received);
+  });
+  return new Blob(parts as BlobPart[], { type: response.headers.get('Content-Type') ?? 'application/octet-stream' });
+}
+
+/**
+ * A request whose answer is a stream of JSON lines (a long restore reporting each part). Each line is
+ * parsed with `schema` and handed to `onLine`; an error status is thrown as an ApiError as usual.
+ */
+export async function apiLines<T>(path: string, options: RequestOptions<T> & { schema: z.ZodType<T> }, onLine: (line: T) => void): Promise<void> {
+  const response = await sendWithRefresh(path, { ...(options as RequestOptions<unknown>), accept: 'application/x-ndjson' });
+  if (!response.ok) throw await failure(response);
+  const decoder = new TextDecoder();
+  let pending = '';
+  const take = (text: string) => {
+    const parsed = options.schema.safeParse(JSON.parse(text));
+    if (!parsed.success) throw new ApiError(response.status, 'bad_response', 'The server sent an answer this version of the app does not understand');
+    onLine(parsed.data);
+  };
+  await readBody(response, (chunk) => {
+    pending += decoder.decode(chunk, { stream: true });
+    const lines = pending.split('\n');
+    pending = lines.pop() ?? '';
+    for (const line of lines) if (line.trim()) take(line);
+  });
+  if (pending.trim()) take(pending);
 }
