@@ -1,4 +1,5 @@
-import useSWR from 'swr';
+import useSWR, { mutate } from 'swr';
+import { publicUser } from '@shared/contracts/auth';
 import { archiveImportResult, archiveProgressLine, archiveSummary, type ArchiveImportResult, type ArchiveProgressLine } from '@shared/contracts/archive';
 import { api, apiDownload, apiLines, ApiError } from '@/lib/api/client';
 
@@ -35,4 +36,10 @@ export async function restoreArchive(file: File, onProgress: (progress: RestoreP
   });
   if (!result) throw new ApiError(500, 'restore_failed', 'The restore stopped before it finished; restoring again fills in the rest');
   return result;
+}
+
+/** After a restore every list may have changed (hunts, keepers, weights, the archive's own summary). */
+export async function afterRestore() {
+  await mutate(() => true);
+  return api('/me', { schema: publicUser });
 }

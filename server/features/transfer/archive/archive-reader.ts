@@ -115,7 +115,8 @@ export async function readArchive(path: string, limits: ArchiveLimits, visitor: 
           const parsed = archiveAccount.safeParse(event.value);
           if (!parsed.success) for (const [field, message] of Object.entries(fieldsFromZod(parsed.error))) report(`account.${field}`, message);
           else account = parsed.data;
-        } else throw new ArchiveProblem(ARCHIVE_JSON, `has "${key}", which is not part of a version 1 archive`);
+        } else if (key in SECTIONS) throw new ArchiveProblem(`${ARCHIVE_JSON} ${key}`, 'must be a list');
+        else throw new ArchiveProblem(ARCHIVE_JSON, `has "${key}", which is not part of a version 1 archive`);
         if (account && exportedAt) await visitor.account?.(account, exportedAt);
         return;
       }

@@ -10,7 +10,8 @@ import { useSubmit } from '@/lib/api/use-submit';
 import { canPickFiles, pickBinaryFile } from '@/lib/files';
 import { useTheme } from '@/theme/theme-provider';
 import { fonts, radius, space } from '@/theme/tokens';
-import { previewArchive, restoreArchive, type RestoreProgress } from '../archive-api';
+import { useSession } from '@/lib/session/session-provider';
+import { afterRestore, previewArchive, restoreArchive, type RestoreProgress } from '../archive-api';
 
 const count = (n: number) => n.toLocaleString('en-US');
 
@@ -61,16 +62,25 @@ function CountsTable({ counts }: { counts: ArchiveImportResult['counts'] }) {
   );
 }
 
-const adoptedLine = (hunts: ArchiveImportResult['adoptedHunts']) =>
-  hunts
-    .map((hunt) => `${hunt.title} (${hunt.reason === 'crew' ? 'you were crew in it' : 'its original belongs to someone else here, so you get your own copy'})`)
-    .join('; ');
+/** Hunts that come back as the importer's own, grouped by why, in words for the notice. */
+const adoptedLine = (hunts: ArchiveImportResult['adoptedHunts']) => {
+  const titles = (reason: 'crew' | 'owned-here') => hunts.filter((hunt) => hunt.reason === reason).map((hunt) => hunt.title);
+  const crew = titles('crew');
+  const copies = titles('owned-here');
+  return [
+    crew.length ? `You were crew in ${crew.join('; ')}: ${crew.length === 1 ? 'it becomes' : 'they become'} yours.` : null,
+    copies.length ? `Someone else on this server owns ${copies.join('; ')}, so you get your own ${copies.length === 1 ? 'copy' : 'copies'}.` : null,
+  ]
+    .filter(Boolean)
+    .join(' ');
+};
 
 /**
  * Choose an archive, see what it would add (a dry run on the server), confirm, and watch each part go in.
  * Restoring the same archive twice adds nothing, so a restore cut short is finished by running it again.
  */
 export function ArchiveRestoreCard() {
+  const { updateUser } = useSession();
   const [file, setFile] = useState<File | null>(null);
   const [preview, setPreview] = useState<ArchiveImportResult | null>(null);
   const [progress, setProgress] = useState<RestoreProgress | null>(null);
@@ -91,6 +101,8 @@ export function ArchiveRestoreCard() {
       setOutcome(await restoreArchive(file, setProgress));
       setPreview(null);
       setFile(null);
+      const me = await afterRestore();
+      updateUser({ id: me.id, email: me.email, displayName: me.displayName, role: me.role });
     } finally {
       setProgress(null);
     }
@@ -162,7 +174,7 @@ export function ArchiveRestoreCard() {
       {outcome ? (
         <Notice tone="ok" title="Restored">
           {KINDS.map(({ key, label }) => `${label.toLowerCase()}: ${count(outcome.counts[key].add)} added`).join(' · ') +
-            (outcome.adoptedHunts.length ? `. Now your own: ${adoptedLine(outcome.adoptedHunts)}.` : '.')}
+            (outcome.adoptedHunts.length ? `. ${adoptedLine(outcome.adoptedHunts)}` : '.')}
         </Notice>
       ) : null}
     </Card>
