@@ -14,11 +14,15 @@ const tables: WeightTable[] = [
   DEFAULT_WEIGHTS,
   ...([9, 99, 9999, 99999] as LowLimit[]).map((lowLimit) => ({ ...DEFAULT_WEIGHTS, lowLimit })),
   {
-    patterns: { solid: 3, ladder: -2, radar: 7.5, repeater: 0, 'super-repeater': 1, rotator: 2, binary: 6, trinary: 0.5, low: 9, high: -1 },
+    patterns: {
+      solid: 3, ladder: -2, radar: 7.5, repeater: 0, 'super-repeater': 1, rotator: 2, binary: 6, trinary: 0.5, low: 9, high: -1,
+      'super-radar': 2, 'true-binary': 1.5,
+    },
     runs: { 3: 1, 5: 4, 8: 10 },
     counts: { 4: 0.25, 6: 3 },
     lowLimit: 9999,
     starBonus: 2.5,
+    smallStarRunBonus: 1,
     watchBonus: 4,
     keepThreshold: 3,
   },

@@ -50,7 +50,10 @@ function figures(row: Record<string, unknown> | undefined, lowLimit: LowLimit): 
       probability: r.probability,
       expected: r.expected,
       pAtLeast: r.pAtLeast ?? 1,
+      pAtMost: r.pAtMost ?? 1,
+      verdict: r.verdict ?? 'no-comparison',
     })),
+    basis: 'poisson' as const,
     caveat: expected.caveat,
   };
 }
