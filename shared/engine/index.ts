@@ -81,6 +81,8 @@ export { score, DEFAULT_WEIGHTS, SCORE_EXPLANATION } from './score';
 export type { ScoreInput } from './score';
 export { expectedHits, poissonTail, EXPECTED_CAVEAT } from './expect';
 export { sequentialHits, runDistribution, SEQUENTIAL_CAVEAT } from './sequential';
+export { combinedHits, MIXED_CAVEAT } from './combined';
+export type { TallyPart } from './combined';
 export { VERDICT_LEVEL } from './_lib/verdict';
 export { completeWeights } from './weights';
 export { sweep, MAX_SWEEP } from './sweep';

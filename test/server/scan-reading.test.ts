@@ -43,13 +43,14 @@ const serialText = fc
 const anyText = fc.oneof(serialText, fc.string({ maxLength: 20 }));
 
 describe('the stored reading of a scan', () => {
-  it('when any serial is read for storage, then every stored field equals the engine’s read() with the same table, watch patterns and star', () => {
+  it('when any serial is read for storage, then every stored field equals the engine’s read() with the same table, watch patterns, star and star run', () => {
+    const runSizes = fc.constantFrom(null, 320_000, 640_000, 3_200_000);
     fc.assert(
-      fc.property(anyText, fc.integer({ min: 0, max: tables.length - 1 }), fc.boolean(), fc.boolean(), (text, tableIndex, star, withWatch) => {
+      fc.property(anyText, fc.integer({ min: 0, max: tables.length - 1 }), fc.boolean(), fc.boolean(), runSizes, (text, tableIndex, star, withWatch, starRunSize) => {
         const weights = tables[tableIndex]!;
         const patterns: WatchPattern[] = withWatch ? watch : [];
-        const engine = read(text, { weights, watch: patterns, star });
-        const stored = storedReading(text, { weights, watch: patterns }, { star });
+        const engine = read(text, { weights, watch: patterns, star, starRunSize });
+        const stored = storedReading(text, { weights, watch: patterns }, { star, starRunSize });
         if (!engine.ok) {
           expect(stored).toEqual({ ok: false, message: engine.error.message });
           return;
