@@ -20,7 +20,9 @@ vi.mock('react-native-svg', () => {
 });
 
 /** Figures as the server builds them: the engine's expected hits for the actual counts given. */
-function figures(notes: number, actual: Partial<Record<PatternId, number>>) {
+function figures(notes: number, found: Partial<Record<PatternId, number>>) {
+  // The server counts every pattern, so a pattern not named was found 0 times.
+  const actual = Object.fromEntries(PATTERN_IDS.map((id) => [id, found[id] ?? 0])) as Record<PatternId, number>;
   const expected = expectedHits(notes, actual);
   const patterns: TallyPatternRow[] = expected.rows.map((row) => ({
     id: row.id,
@@ -71,7 +73,7 @@ describe('the per-pattern chart against chance', () => {
     expect(chart.getAttribute('aria-label')).toBe(
       'Hits found against hits expected by chance in 4,000 notes. More than chance: binary.',
     );
-    // 100 notes with no hits: the likeliest pattern, trinary, expects 0.7, and P(X = 0) ≈ 0.5.
+    // 100 notes with no finds: the likeliest pattern, trinary, expects 0.7, and P(X = 0) ≈ 0.5: no comparison.
     expect(chanceSummary(figures(100, {}))).toBe('Hits found against hits expected by chance in 100 notes. Every pattern is about what chance predicts.');
     // 1,000 notes with no trinary where 6.96 are expected: P(X = 0) = e^−6.96 ≈ 0.00095, a picked-over bank.
     expect(chanceSummary(figures(1000, {}))).toBe('Hits found against hits expected by chance in 1,000 notes. Fewer than chance: trinary.');
