@@ -6,7 +6,8 @@
  *   tsx scripts/reading.ts --sweep FIRST COUNT [--patterns a,b] [--json]
  *
  * Options: --low-limit 9|99|999|9999|99999, --watch PATTERN (repeatable),
- * --series S, --district L, --facility DC|FW, --denomination N, --star, --help.
+ * --series S, --district L, --facility DC|FW, --denomination N, --star,
+ * --star-run N, --note-type federal-reserve|older, --help.
  */
 import {
   DEFAULT_WEIGHTS,
@@ -20,6 +21,7 @@ import {
   read,
   sweep,
 } from '../shared/engine';
+import { runEndFor } from '../shared/trade';
 import type { PatternId, ReadOptions, ReadResult, Reading } from '../shared/engine';
 
 const USAGE = `Usage:
@@ -34,8 +36,10 @@ Options:
   --series S             series as printed, e.g. 2013 or 1988A (adds trade notes)
   --district L           district letter A–L
   --facility DC|FW       printing facility
-  --denomination N       face value in dollars
+  --denomination N       face value in dollars (checks the serial format; neighbours and sweeps stop at its run end)
   --star                 treat every note as a star note
+  --star-run N           the star run's size, as looked up (runs of 640,000 or fewer are small)
+  --note-type T          federal-reserve (default) or older (silver certificates, United States notes)
   --patterns a,b         patterns to sweep (default: all): ${PATTERN_IDS.join(', ')}
   --help                 this text`;
 
@@ -109,12 +113,27 @@ function parseArgs(argv: string[]): Cli {
         cli.options.facility = f;
         break;
       }
-      case '--denomination':
-        cli.options.denomination = Number(value());
+      case '--denomination': {
+        const n = Number(value());
+        if (runEndFor(n) === null) fail('--denomination must be 1, 2, 5, 10, 20, 50 or 100');
+        cli.options.denomination = n;
         break;
+      }
       case '--star':
         cli.options.star = true;
         break;
+      case '--star-run': {
+        const n = Number(value());
+        if (!Number.isInteger(n) || n < 1) fail('--star-run must be a whole number of notes');
+        cli.options.starRunSize = n;
+        break;
+      }
+      case '--note-type': {
+        const t = value();
+        if (t !== 'federal-reserve' && t !== 'older') fail('--note-type must be federal-reserve or older');
+        cli.options.noteType = t;
+        break;
+      }
       default:
         if (arg.startsWith('--')) fail(`unknown option ${arg}`);
         cli.serials.push(arg);
@@ -124,9 +143,10 @@ function parseArgs(argv: string[]): Cli {
   return cli;
 }
 
-/** Exactly the fields issue 3 lists for the JSON line of one input. */
+/** The fields issue 3 lists for the JSON line of one input, with the serial's parts and trade notes (issue 12). */
 function jsonLine(result: ReadResult): string {
   if (!result.ok) return JSON.stringify({ input: result.input, ok: false, error: result.error });
+  const { prefix, seriesLetter, district, suffix, star } = result;
   return JSON.stringify({
     input: result.input,
     ok: true,
@@ -140,6 +160,8 @@ function jsonLine(result: ReadResult): string {
     neighbours: result.neighbours,
     odds: result.odds,
     score: result.score,
+    serial: { prefix, seriesLetter, district, suffix, star },
+    tradeNotes: result.trade.map(({ id, severity, text, source }) => ({ id, severity, text, source })),
   });
 }
 
@@ -227,7 +249,10 @@ async function runSweep(cli: Cli, out: Output): Promise<void> {
   if (!parsed.ok) fail(`--sweep FIRST: ${parsed.error.message}`);
   let result;
   try {
-    result = sweep(parsed.digits, count, cli.patterns ?? PATTERN_IDS, { lowLimit: cli.options.lowLimit ?? DEFAULT_WEIGHTS.lowLimit });
+    result = sweep(parsed.digits, count, cli.patterns ?? PATTERN_IDS, {
+      lowLimit: cli.options.lowLimit ?? DEFAULT_WEIGHTS.lowLimit,
+      last: runEndFor(cli.options.denomination)?.last,
+    });
   } catch (error) {
     fail(`--sweep: ${(error as Error).message}`);
   }
@@ -237,7 +262,7 @@ async function runSweep(cli: Cli, out: Output): Promise<void> {
   }
   await out.line(`serial    patterns`);
   for (const hit of result.hits) await out.line(`${hit.serial}  ${hit.patterns.map((p) => PATTERN_NAMES[p]).join(', ')}`);
-  const cut = result.truncated ? ' (stopped at 99999999)' : '';
+  const cut = result.truncated ? ` (stopped at ${String(result.last).padStart(8, '0')})` : '';
   await out.line(`${grouped(result.hits.length)} hits in ${String(result.first).padStart(8, '0')}–${String(result.last).padStart(8, '0')}, ${grouped(result.count)} serials${cut}`);
 }
 

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { PATTERN_IDS } from '../engine/patterns';
 
 export const uuid = z.string().uuid('must be an id');
 export const isoDateTime = z.string().datetime({ offset: true, message: 'must be an ISO date and time' });
@@ -33,19 +34,8 @@ export const denomination = z
   .int('must be a face value in dollars')
   .refine((value) => (DENOMINATIONS as readonly number[]).includes(value), 'must be 1, 2, 5, 10, 20, 50 or 100');
 
-/** Ids of the engine's patterns, in the engine's canonical order (PATTERN_IDS). */
-export const PATTERN_ID_LIST = [
-  'solid',
-  'ladder',
-  'radar',
-  'repeater',
-  'super-repeater',
-  'rotator',
-  'binary',
-  'trinary',
-  'low',
-  'high',
-] as const;
+/** Ids of the engine's patterns: the engine's PATTERN_IDS itself, so the two cannot drift. */
+export const PATTERN_ID_LIST = PATTERN_IDS;
 export const patternId = z.enum(PATTERN_ID_LIST);
 
 /** Whole numbers in a query string arrive as text. */

@@ -1,4 +1,6 @@
 import { z } from 'zod';
+import { NEAR_MISS_PATTERN_IDS } from '../engine/near-miss';
+import { NEIGHBOUR_PATTERN_IDS } from '../engine/neighbours';
 import type { Reading } from '../engine/types';
 import { patternId, serialDigits } from './common';
 
@@ -31,9 +33,11 @@ export const readingSchema = z.object({
   digits: serialDigits,
   value: z.number().int(),
   prefix: z.string(),
+  seriesLetter: z.string().nullable(),
   suffix: z.string(),
   star: z.boolean(),
   district: z.string().nullable(),
+  runEnd: z.number().int(),
   lowLimit: z.number().int(),
   patterns: z.array(patternId),
   distinctDigits: z.number().int(),
@@ -42,8 +46,11 @@ export const readingSchema = z.object({
   lowTier: z.number().int().nullable(),
   run: z.object({ digit: z.number().int(), length: z.number().int(), start: z.number().int() }).nullable(),
   count: z.object({ digit: z.number().int(), times: z.number().int() }).nullable(),
-  nearMiss: z.record(z.enum(['binary', 'trinary', 'solid', 'radar', 'repeater', 'ladder']), nearMiss),
-  neighbours: z.record(z.enum(['solid', 'ladder', 'radar', 'repeater', 'super-repeater', 'rotator', 'binary', 'trinary']), neighbours),
+  nearMiss: z.record(z.enum(NEAR_MISS_PATTERN_IDS as [(typeof NEAR_MISS_PATTERN_IDS)[number], ...(typeof NEAR_MISS_PATTERN_IDS)[number][]]), nearMiss),
+  neighbours: z.record(
+    z.enum(NEIGHBOUR_PATTERN_IDS as [(typeof NEIGHBOUR_PATTERN_IDS)[number], ...(typeof NEIGHBOUR_PATTERN_IDS)[number][]]),
+    neighbours,
+  ),
   odds: z.object({
     domainSize: z.number(),
     patterns: z.array(odds.extend({ id: patternId })),
@@ -53,7 +60,7 @@ export const readingSchema = z.object({
   score: z.object({
     points: z.number(),
     lines: z.array(
-      z.object({ kind: z.enum(['pattern', 'run', 'count', 'star', 'watch']), label: z.string(), points: z.number(), text: z.string() }),
+      z.object({ kind: z.enum(['pattern', 'run', 'count', 'star', 'star-run', 'watch']), label: z.string(), points: z.number(), text: z.string() }),
     ),
     keep: z.boolean(),
     keepThreshold: z.number(),

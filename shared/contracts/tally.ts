@@ -9,8 +9,12 @@ export const tallyPatternRow = z.object({
   /** Chance that one random serial has the pattern (the engine's exact count ÷ domain). */
   probability: z.number(),
   expected: z.number(),
-  /** Poisson P(X ≥ hits) with mean `expected`: small means luckier than chance. */
+  /** P(X ≥ hits): Poisson for circulated notes, the exact run distribution for notes in sequence. */
   pAtLeast: z.number(),
+  /** P(X ≤ hits), the same way. */
+  pAtMost: z.number(),
+  /** At the 95% level; `no-comparison` where no count on that side could be unusual. */
+  verdict: z.enum(['more', 'fewer', 'as-chance', 'no-comparison']),
 });
 export type TallyPatternRow = z.infer<typeof tallyPatternRow>;
 
@@ -26,6 +30,8 @@ export const tallyFigures = z.object({
   perThousand: z.number(),
   lowLimit: z.number().int(),
   patterns: z.array(tallyPatternRow),
+  /** What the figures compare against: `poisson` (circulated), `sequence` (new notes in sequence), `mixed`. */
+  basis: z.enum(['poisson', 'sequence', 'mixed']),
   caveat: z.string(),
 });
 

@@ -1,4 +1,5 @@
 import { poissonAtLeast } from './_lib/poisson';
+import { verdictOf } from './_lib/verdict';
 import { DOMAIN_LAST } from './_lib/serial-value';
 import { patternCount } from './odds';
 import { DEFAULT_LOW_LIMIT, PATTERN_IDS, isLowLimit } from './patterns';
@@ -6,10 +7,10 @@ import type { ExpectedHits, LowLimit, PatternId } from './types';
 
 /** Shown wherever expected hits are: why the Poisson figures are only a guide. */
 export const EXPECTED_CAVEAT =
-  'Expected counts treat each note as an independent random serial from 00000001–99999999. ' +
-  'Notes from a new strap, bundle or brick are sequential, not independent draws: their hits cluster ' +
-  '(a strap either holds a repeater or it does not), so for new notes a sweep of the actual range says more ' +
-  'than these odds. Circulated, mixed notes come closer to the assumption.';
+  'For circulated notes: each note is treated as an independent random serial from 00000001–99999999, ' +
+  'so the counts follow a Poisson distribution. Notes from a new strap, bundle or brick are sequential, not ' +
+  'independent draws: their finds cluster (a strap either holds a repeater or it does not), so hunts of new ' +
+  'notes in sequence are compared with the exact distribution for runs of that length instead.';
 
 /**
  * P(X ≥ k) for a Poisson count with the given mean: how surprising it is to
@@ -30,12 +31,12 @@ export function poissonTail(k: number, mean: number): number {
  * exact probability over the domain) and, when actual counts are given, the
  * Poisson probability of seeing at least that many: small values mean a
  * lucky hunt (or a picked-over bank when actual is far below expected).
- * Counts that are not whole numbers ≥ 0 are treated as not given. Carries
- * EXPECTED_CAVEAT: sequential straps are not independent draws.
+ * Counts that are not whole numbers ≥ 0 are treated as not given. For
+ * circulated notes only: notes in sequence go to `sequentialHits`.
  *
  * @example
  * expectedHits(10_000, { binary: 3 }).rows.find((r) => r.id === 'binary')
- * // { id: 'binary', probability: 0.0001143…, expected: 1.143…, actual: 3, pAtLeast: 0.108… }
+ * // { id: 'binary', probability: 0.0001143…, expected: 1.143…, actual: 3, pAtLeast: 0.108…, pAtMost: 0.96…, verdict: 'as-chance' }
  */
 export function expectedHits(
   notes: number,
@@ -52,7 +53,12 @@ export function expectedHits(
     const expected = notes * probability;
     const given = actualCounts[id];
     const actual = typeof given === 'number' && Number.isInteger(given) && given >= 0 ? given : null;
-    return { id, probability, expected, actual, pAtLeast: actual === null ? null : poissonAtLeast(actual, expected) };
+    if (actual === null) return { id, probability, expected, actual, pAtLeast: null, pAtMost: null, verdict: null };
+    const pAtLeast = poissonAtLeast(actual, expected);
+    const pAtMost = 1 - poissonAtLeast(actual + 1, expected);
+    // Poisson has no highest count, so only the lowest (none at all) can make a side meaningless.
+    const verdict = verdictOf(pAtLeast, pAtMost, Math.exp(-expected), 0, actual < expected);
+    return { id, probability, expected, actual, pAtLeast, pAtMost, verdict };
   });
-  return { notes, lowLimit, rows, caveat: EXPECTED_CAVEAT };
+  return { notes, lowLimit, inSequence: false, rows, caveat: EXPECTED_CAVEAT };
 }

@@ -10,6 +10,7 @@
  * a member, target or neighbour. Nothing here mutates its input.
  */
 export type {
+  ChanceVerdict,
   CountFeature,
   DateFormat,
   ExpectedHits,
@@ -33,6 +34,7 @@ export type {
   ReadingOdds,
   ReadOptions,
   ReadResult,
+  RunDistribution,
   RunFeature,
   Score,
   ScoreLine,
@@ -45,7 +47,7 @@ export type {
   WatchResult,
   WeightTable,
 } from './types';
-export type { TradeNote } from '../trade/types';
+export type { NoteType, TradeNote } from '../trade/types';
 
 export { parseSerial, MAX_SERIAL_TEXT } from './parse';
 export {
@@ -78,6 +80,11 @@ export type { OddsOptions } from './odds';
 export { score, DEFAULT_WEIGHTS, SCORE_EXPLANATION } from './score';
 export type { ScoreInput } from './score';
 export { expectedHits, poissonTail, EXPECTED_CAVEAT } from './expect';
+export { sequentialHits, runDistribution, SEQUENTIAL_CAVEAT } from './sequential';
+export { combinedHits, MIXED_CAVEAT } from './combined';
+export type { TallyPart } from './combined';
+export { VERDICT_LEVEL } from './_lib/verdict';
+export { completeWeights } from './weights';
 export { sweep, MAX_SWEEP } from './sweep';
 export { parseWatchPattern, validWatchPattern, watchText, matchWatch, DATE_FORMATS, WATCH_SYNTAX } from './watch';
 export { describeNearMiss, describeNeighbour, ordinal } from './describe';

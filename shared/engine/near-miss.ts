@@ -12,6 +12,8 @@ export const NEAR_MISS_PATTERN_IDS: readonly NearMissPatternId[] = [
   'radar',
   'repeater',
   'ladder',
+  'super-radar',
+  'true-binary',
 ];
 
 
@@ -264,7 +266,65 @@ function ladderMiss(): NearMiss {
 }
 
 
-/** All six near misses of a value already known to be a serial. */
+/** The digit at 1-based position p (d1 in the top nibble). */
+function digitAt(p: number): number {
+  return (serialBcd >>> (4 * (8 - p))) & 15;
+}
+
+/**
+ * Outer digit a at both ends, inner digit b six times, a ≠ b: every (a, b) is
+ * tried (90 targets, a few operations each) and the cheapest kept, ties to the
+ * smaller inner digit, then the smaller outer one.
+ */
+function superRadarMiss(): NearMiss {
+  const inner = new Uint8Array(10);
+  for (let p = 2; p <= 7; p++) inner[digitAt(p)]!++;
+  const first = digitAt(1);
+  const last = digitAt(8);
+  let best = 0;
+  let bestDistance = 9;
+  for (let b = 0; b <= 9; b++) {
+    for (let a = 0; a <= 9; a++) {
+      if (a === b) continue;
+      const distance = 6 - inner[b]! + (first === a ? 0 : 1) + (last === a ? 0 : 1);
+      if (distance < bestDistance) {
+        bestDistance = distance;
+        best = (a << 28) | Math.imul(b, 0x0111111) << 4 | a;
+      }
+    }
+  }
+  return missTo(best | 0);
+}
+
+/**
+ * Only 0s and 1s, both present: every other digit becomes the more frequent of
+ * 0 and 1 (0 on a tie); when one of them would be missing, the rightmost
+ * changed position (or else the rightmost digit) takes it.
+ */
+function trueBinaryMiss(): NearMiss {
+  const zeros = countOf(0);
+  const ones = countOf(1);
+  const fill = ones > zeros ? 1 : 0;
+  let target = 0;
+  let lastChanged = -1;
+  for (let p = 1; p <= 8; p++) {
+    const d = digitAt(p);
+    const kept = d === 0 || d === 1 ? d : fill;
+    if (kept !== d) lastChanged = p;
+    target = (target << 4) | kept;
+  }
+  const hasZero = zeros > 0 || (fill === 0 && lastChanged > 0);
+  const hasOne = ones > 0 || (fill === 1 && lastChanged > 0);
+  if (!hasZero || !hasOne) {
+    const missing = hasZero ? 1 : 0;
+    const p = lastChanged > 0 ? lastChanged : 8;
+    const shift = 4 * (8 - p);
+    target = (target & ~(15 << shift)) | (missing << shift);
+  }
+  return missTo(target | 0);
+}
+
+/** Every near miss of a value already known to be a serial. */
 export function nearMissesOfValue(value: number): Record<NearMissPatternId, NearMiss> {
   load(value);
   return {
@@ -274,12 +334,14 @@ export function nearMissesOfValue(value: number): Record<NearMissPatternId, Near
     radar: radarMiss(),
     repeater: repeaterMiss(),
     ladder: ladderMiss(),
+    'super-radar': superRadarMiss(),
+    'true-binary': trueBinaryMiss(),
   };
 }
 
 /**
- * How close a serial comes to binary, trinary, solid, radar, repeater and
- * ladder: for each, the fewest digit changes that reach a member (`distance`),
+ * How close a serial comes to binary, trinary, solid, radar, repeater,
+ * ladder, super radar and true binary: for each, the fewest digit changes that reach a member (`distance`),
  * one member at that distance (`target`, never 00000000) and the 1-based
  * positions that change. When the serial already is a member the distance is
  * 0, the target is the serial and no position changes; so a solid, which has

@@ -1,6 +1,6 @@
 import { exactlyDistinctStrings, repeatAtLeastStrings, runAtLeastStrings } from './_lib/combinatorics';
 import { lowerBound, membersOf } from './_lib/members';
-import { PATTERN_ORDER, idsToMask, isPatternId, maskToIds } from './_lib/pattern-bits';
+import { MASK_COUNT, PATTERN_ORDER, idsToMask, isPatternId, maskToIds } from './_lib/pattern-bits';
 import { DOMAIN_LAST } from './_lib/serial-value';
 import { DEFAULT_LOW_LIMIT, HIGH_FROM, isLowLimit, patternMask } from './patterns';
 import type { LowLimit, NeighbourPatternId, PatternId, PatternOdds, ReadingOdds } from './types';
@@ -86,7 +86,7 @@ function memberValues(id: PatternId, r: Resolved): ArrayLike<number> & Iterable<
  * combinatorics, less those.
  */
 function buildTable(r: Resolved): SignatureTable {
-  const tally = new Float64Array(1024);
+  const tally = new Float64Array(MASK_COUNT);
   const trinaryBit = 1 << PATTERN_ORDER.indexOf('trinary');
   const beforeTrinary = trinaryBit - 1;
   for (let i = 0; i < PATTERN_ORDER.length; i++) {
@@ -106,13 +106,13 @@ function buildTable(r: Resolved): SignatureTable {
     }
   }
   let trinariesElsewhere = 0;
-  for (let mask = 0; mask < 1024; mask++) if (mask !== trinaryBit && (mask & trinaryBit) !== 0) trinariesElsewhere += tally[mask]!;
+  for (let mask = 0; mask < MASK_COUNT; mask++) if (mask !== trinaryBit && (mask & trinaryBit) !== 0) trinariesElsewhere += tally[mask]!;
   tally[trinaryBit] = patternCount('trinary', { lowLimit: r.lowLimit, domainLast: r.last }) - trinariesElsewhere;
   let withPatterns = 0;
-  for (let mask = 1; mask < 1024; mask++) withPatterns += tally[mask]!;
+  for (let mask = 1; mask < MASK_COUNT; mask++) withPatterns += tally[mask]!;
   tally[0] = r.last - withPatterns;
   const exact = new Map<number, number>();
-  for (let mask = 0; mask < 1024; mask++) if (tally[mask]! > 0) exact.set(mask, tally[mask]!);
+  for (let mask = 0; mask < MASK_COUNT; mask++) if (tally[mask]! > 0) exact.set(mask, tally[mask]!);
   return { domainSize: r.last, exact, atLeast: new Map() };
 }
 
@@ -151,7 +151,7 @@ function checkIds(ids: readonly PatternId[], fn: string): number {
  * domain (cached), never by sampling.
  *
  * @example
- * signatureCount(['repeater', 'super-repeater', 'binary']) // 88 (12121212 and kin, less 69696969 and 96969696, which are rotators too)
+ * signatureCount(['repeater', 'super-repeater', 'binary']) // 86 (12121212 and kin, less the rotators 69696969 and 96969696 and the true binaries 01010101 and 10101010)
  * signatureCount(['solid'], { match: 'all' }) // 9
  */
 export function signatureCount(

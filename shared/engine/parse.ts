@@ -1,3 +1,4 @@
+import type { NoteType } from '../trade/types';
 import type { ParseErrorCode, ParseResult } from './types';
 
 /** Longest text `parseSerial` looks at; anything longer is refused at once. */
@@ -31,16 +32,21 @@ function shown(ch: string): string {
  * (older style) or two (modern style) prefix letters, and a suffix letter or a
  * star (`*` or ★) after the digits; older notes' star before the digits is
  * accepted too. Spaces and dashes are ignored, lower case is read as upper.
- * The district is the last prefix letter and must be A–L. Never throws: any
- * other input gives `{ ok: false, error: { code, message } }`.
+ * On a Federal Reserve note (the default) the district is the last prefix
+ * letter and must be A–L, and the first of two is the series letter. On the
+ * older note types (`{ noteType: 'older' }`) one prefix letter is a block
+ * letter, any letter, and there is no district. Whether the parts fit the
+ * note's denomination and series is for `formatNotes` (shared/trade) to say.
+ * Never throws: any other input gives `{ ok: false, error: { code, message } }`.
  *
  * @example
  * parseSerial('mb 0407 1776 *')
  * // { ok: true, digits: '04071776', value: 4071776, prefix: 'MB', suffix: '',
- * //   star: true, district: 'B', style: 'modern' }
+ * //   star: true, starBefore: false, district: 'B', seriesLetter: 'M', style: 'modern' }
  * parseSerial('1234 567').ok // false (too-few-digits)
  */
-export function parseSerial(input: unknown): ParseResult {
+export function parseSerial(input: unknown, options: { noteType?: NoteType } = {}): ParseResult {
+  const older = options?.noteType === 'older';
   if (typeof input !== 'string') return fail('not-text', 'A serial is text, such as 12345678 or MB 12345678 A.');
   if (input.length > MAX_SERIAL_TEXT) {
     return fail('too-long', `That is ${input.length} characters; a serial with its letters is about a dozen.`);
@@ -55,7 +61,18 @@ export function parseSerial(input: unknown): ParseResult {
       value = value * 10 + (c - 48);
     }
     if (i === 8 && value !== 0) {
-      return { ok: true, digits: input, value, prefix: '', suffix: '', star: false, district: null, style: 'bare' };
+      return {
+        ok: true,
+        digits: input,
+        value,
+        prefix: '',
+        suffix: '',
+        star: false,
+        starBefore: false,
+        district: null,
+        seriesLetter: null,
+        style: 'bare',
+      };
     }
   }
   let prefix = '';
@@ -107,7 +124,7 @@ export function parseSerial(input: unknown): ParseResult {
     return fail('too-many-prefix-letters', `"${prefix}" is ${prefix.length} letters; the prefix has one or two.`);
   }
   if (trailing > 1) return fail('too-many-suffix-letters', 'After the digits comes one letter or a star, not more.');
-  const district = prefix === '' ? null : prefix[prefix.length - 1]!;
+  const district = prefix === '' || (older && prefix.length === 1) ? null : prefix[prefix.length - 1]!;
   if (district !== null && !DISTRICT_LETTERS.includes(district)) {
     return fail(
       'unknown-district',
@@ -124,7 +141,9 @@ export function parseSerial(input: unknown): ParseResult {
     prefix,
     suffix,
     star: starBefore || starAfter,
+    starBefore,
     district,
+    seriesLetter: prefix.length === 2 ? prefix[0]! : null,
     style: prefix.length === 2 ? 'modern' : prefix.length === 1 ? 'older' : 'bare',
   };
 }

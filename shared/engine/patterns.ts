@@ -3,8 +3,13 @@ import { digitTables } from './_lib/digit-tables';
 import { serialValue } from './_lib/serial-value';
 import type { LowLimit, PatternId, SerialInput } from './types';
 
-/** Every pattern id in canonical order (rarest-looking first, bands last). */
-export const PATTERN_IDS: readonly PatternId[] = PATTERN_ORDER;
+/**
+ * Every pattern id in canonical order: the engine's first ten (rarest-looking
+ * first, bands last), then the trade patterns added later. Bit i of every
+ * pattern mask, stored ones included, is PATTERN_IDS[i]; the contracts' enum
+ * and the server's bit masks derive from this list.
+ */
+export const PATTERN_IDS = PATTERN_ORDER;
 
 /** Display names, as a hunter says them. */
 export const PATTERN_NAMES: Readonly<Record<PatternId, string>> = {
@@ -18,6 +23,8 @@ export const PATTERN_NAMES: Readonly<Record<PatternId, string>> = {
   trinary: 'trinary',
   low: 'low serial',
   high: 'high serial',
+  'super-radar': 'super radar',
+  'true-binary': 'true binary',
 };
 
 /** One-line definitions the app can show beside each pattern. */
@@ -31,7 +38,11 @@ export const PATTERN_DEFINITIONS: Readonly<Record<PatternId, string>> = {
   binary: 'exactly two different digits, e.g. 30033303',
   trinary: 'exactly three different digits, e.g. 52252922',
   low: 'at or below the low limit (9, 99, 999, 9,999 or 99,999; 999 unless the weight table says otherwise)',
-  high: 'at or above 99,990,000',
+  high:
+    'at or above 99,990,000: past every circulating run end (96,000,000 for $1–$20, 99,200,000 for $50 and $100), so uncut-sheet territory rather than a strap find',
+  'super-radar': 'a radar whose six inner digits are one digit, e.g. 38888883 (90 serials)',
+  'true-binary':
+    'a binary of the digits 0 and 1 only, e.g. 10011001 (254 serials); many sellers call only these "binary", so a "binary" here is the wider pattern of any two digits',
 };
 
 /** The low limits a weight table may choose, smallest first. */
@@ -70,6 +81,10 @@ const BINARY = 64;
 const TRINARY = 128;
 const LOW = 256;
 const HIGH = 512;
+const SUPER_RADAR = 1024;
+const TRUE_BINARY = 2048;
+/** Digit mask of {0, 1}: a binary with exactly these digits is a true binary. */
+const ZERO_ONE = 3;
 
 let digitMaskOf: Uint16Array | null = null;
 let reversedOf: Uint16Array = new Uint16Array(0);
@@ -97,11 +112,15 @@ export function patternMask(value: number, lowLimit: number = DEFAULT_LOW_LIMIT)
   const dm = digitMaskOf ?? loadTables();
   const hi = (value / 10000) | 0;
   const lo = value - hi * 10000;
-  const distinct = popcountOf[dm[hi]! | dm[lo]!]!;
+  const digits = dm[hi]! | dm[lo]!;
+  const distinct = popcountOf[digits]!;
   let mask = 0;
   if (distinct === 1) mask = SOLID;
-  else if (distinct === 2) mask = BINARY;
-  else if (distinct === 3) mask = TRINARY;
+  else if (distinct === 2) {
+    mask = digits === ZERO_ONE ? BINARY | TRUE_BINARY : BINARY;
+    // A binary radar whose 2nd–4th digits agree has one inner digit: d1 bbbbbb d1, d1 ≠ b.
+    if (reversedOf[hi] === lo && (hi % 1000) % 111 === 0) mask |= SUPER_RADAR;
+  } else if (distinct === 3) mask = TRINARY;
   else if (distinct === 8) {
     if (
       value === 12345678 ||

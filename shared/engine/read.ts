@@ -1,6 +1,7 @@
 import { maskToIds } from './_lib/pattern-bits';
 import { DOMAIN_LAST } from './_lib/serial-value';
 import { tradeNotes } from '../trade/notes';
+import { runEndFor } from '../trade/run-ends';
 import { featuresOfValue } from './features';
 import { nearMissesOfValue } from './near-miss';
 import { allNeighboursOfValue } from './neighbours';
@@ -60,6 +61,9 @@ function watchList(items: ReadOptions['watch']): WatchPattern[] {
  * ignored (an unknown low limit or domain falls back to the default, a bad
  * watch pattern is skipped: validate them with `parseWatchPattern` when saved).
  * The low limit is `options.lowLimit`, else the weight table's, else 999.
+ * With a denomination, neighbours stop at its run end and `domainLast:
+ * 'run-end'` counts the odds over serials up to it; the trade notes then
+ * include what does not fit the denomination's serial format.
  *
  * @example
  * const r = read('LB 1212 1212 A');
@@ -68,18 +72,26 @@ function watchList(items: ReadOptions['watch']): WatchPattern[] {
  * read('1234').ok // false
  */
 export function read(input: string, options: ReadOptions = {}): ReadResult {
-  const parsed = parseSerial(input);
+  const opts: ReadOptions = options !== null && typeof options === 'object' ? options : {};
+  const noteType = opts.noteType === 'older' ? 'older' : 'federal-reserve';
+  const parsed = parseSerial(input, { noteType });
   const text = typeof input === 'string' ? input : String(input);
   if (!parsed.ok) return { ok: false, input: text, error: parsed.error };
-  const opts: ReadOptions = options !== null && typeof options === 'object' ? options : {};
   const weights = opts.weights !== null && typeof opts.weights === 'object' ? opts.weights : DEFAULT_WEIGHTS;
   const lowLimit: LowLimit = isLowLimit(opts.lowLimit)
     ? opts.lowLimit
     : isLowLimit(weights.lowLimit)
       ? weights.lowLimit
       : DEFAULT_LOW_LIMIT;
+  const denomination = typeof opts.denomination === 'number' ? opts.denomination : undefined;
+  const runEnd = noteType === 'older' ? DOMAIN_LAST : (runEndFor(denomination)?.last ?? DOMAIN_LAST);
   const domainLast =
-    Number.isInteger(opts.domainLast) && opts.domainLast! >= 1 && opts.domainLast! <= DOMAIN_LAST ? opts.domainLast! : DOMAIN_LAST;
+    opts.domainLast === 'run-end'
+      ? runEnd
+      : Number.isInteger(opts.domainLast) && (opts.domainLast as number) >= 1 && (opts.domainLast as number) <= DOMAIN_LAST
+        ? (opts.domainLast as number)
+        : DOMAIN_LAST;
+  const starRunSize = typeof opts.starRunSize === 'number' && Number.isInteger(opts.starRunSize) && opts.starRunSize > 0 ? opts.starRunSize : null;
   const value = parsed.value;
   const mask = patternMask(value, lowLimit);
   const patterns = maskToIds(mask);
@@ -87,7 +99,8 @@ export function read(input: string, options: ReadOptions = {}): ReadResult {
   const star = parsed.star || opts.star === true;
   const watch: WatchResult[] = opts.watch === undefined ? [] : watchList(opts.watch).map((p) => watchResultOfValue(value, p));
   // Only a real district letter overrides the one read from the prefix.
-  const district = typeof opts.district === 'string' && /^[A-L]$/i.test(opts.district) ? opts.district.toUpperCase() : parsed.district;
+  const district =
+    noteType === 'older' ? null : typeof opts.district === 'string' && /^[A-L]$/i.test(opts.district) ? opts.district.toUpperCase() : parsed.district;
   const facility = typeof opts.facility === 'string' ? opts.facility.toUpperCase() : undefined;
   return {
     ok: true,
@@ -95,9 +108,11 @@ export function read(input: string, options: ReadOptions = {}): ReadResult {
     digits: parsed.digits,
     value,
     prefix: parsed.prefix,
+    seriesLetter: parsed.seriesLetter,
     suffix: parsed.suffix,
     star,
     district,
+    runEnd,
     lowLimit,
     patterns,
     distinctDigits: feats.distinctDigits,
@@ -107,17 +122,27 @@ export function read(input: string, options: ReadOptions = {}): ReadResult {
     run: feats.run,
     count: feats.count,
     nearMiss: nearMissesOfValue(value),
-    neighbours: allNeighboursOfValue(value),
+    neighbours: allNeighboursOfValue(value, runEnd),
     odds: readingOddsOfMask(mask, lowLimit, domainLast),
     watch,
     // Score against the same low limit the reading used, so its lines match the badges.
-    score: scoreAt({ value, patterns, longestRun: feats.longestRun, maxDigitCount: feats.maxDigitCount, star, watch }, weights, lowLimit),
+    score: scoreAt(
+      { value, patterns, longestRun: feats.longestRun, maxDigitCount: feats.maxDigitCount, star, watch, starRunSize },
+      weights,
+      lowLimit,
+    ),
     trade: tradeNotes({
-      series: typeof opts.series === 'string' ? opts.series : undefined,
+      series: typeof opts.series === 'string' && opts.series.trim() !== '' ? opts.series : undefined,
       district,
       facility: facility === 'DC' || facility === 'FW' ? facility : undefined,
       star,
-      denomination: typeof opts.denomination === 'number' ? opts.denomination : undefined,
+      denomination,
+      value,
+      prefix: parsed.prefix,
+      suffix: parsed.suffix,
+      starBefore: parsed.starBefore,
+      noteType,
+      starRunSize,
     }),
   };
 }

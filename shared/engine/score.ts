@@ -1,3 +1,4 @@
+import { SMALL_STAR_RUN, isSmallStarRun } from '../trade/star-runs';
 import { DEFAULT_LOW_LIMIT, PATTERN_IDS, PATTERN_NAMES, isLowLimit } from './patterns';
 import type { Reading, Score, ScoreLine, WeightTable } from './types';
 
@@ -5,7 +6,11 @@ import type { Reading, Score, ScoreLine, WeightTable } from './types';
  * Weights a new user starts with: roughly each pattern's rarity points
  * (log10 of 1-in-N), rounded to whole numbers a person can reason about, so
  * that a binary (1 in 8,749) reaches the default keep threshold of 4 and a
- * trinary (1 in 144) does not.
+ * trinary (1 in 144) does not. Super radar and true binary add to the radar
+ * and binary weights their members already earn. High serials lie past every
+ * circulating run end (uncut-sheet territory), so `high` alone earns a point,
+ * not a keep: a high serial in a strap calls for a look, and its run-end note
+ * says why. A recorded small star run earns its own bonus on top of the star's.
  */
 export const DEFAULT_WEIGHTS: Readonly<WeightTable> = Object.freeze({
   patterns: Object.freeze({
@@ -18,12 +23,15 @@ export const DEFAULT_WEIGHTS: Readonly<WeightTable> = Object.freeze({
     binary: 4,
     trinary: 1,
     low: 5,
-    high: 4,
+    high: 1,
+    'super-radar': 3,
+    'true-binary': 2,
   }),
   runs: Object.freeze({ 4: 1, 5: 2, 6: 3, 7: 4 }),
   counts: Object.freeze({ 5: 1, 6: 2, 7: 3 }),
   lowLimit: DEFAULT_LOW_LIMIT,
   starBonus: 1,
+  smallStarRunBonus: 3,
   watchBonus: 5,
   keepThreshold: 4,
 }) as WeightTable;
@@ -35,14 +43,18 @@ export const SCORE_EXPLANATION = [
   '• the weight for its longest run of one digit, when that run is 3 or longer and has a weight;',
   '• the weight for its most frequent digit’s count, when that digit appears 4 or more times and the count has a weight;',
   '• the star bonus once, when it is a star note;',
+  `• the small-run bonus once more, when it is a star note whose run you recorded as ${SMALL_STAR_RUN.toLocaleString('en-US')} notes or fewer;`,
   '• the watch bonus for each of your watch patterns it matches.',
   'Patterns add up: a solid is also a radar, a repeater and a super repeater, so it collects all four weights.',
   'When the score reaches your keep threshold, Strapsift suggests keeping the note.',
+  'A star note under the threshold whose run size is not recorded is not sent back without a prompt: look up its run first.',
 ].join('\n');
 
 /** What `score` reads from a reading (a whole Reading works). */
 export type ScoreInput = Pick<Reading, 'value' | 'patterns' | 'longestRun' | 'maxDigitCount' | 'star'> & {
   watch?: ReadonlyArray<{ matched: boolean; text: string }>;
+  /** The star run's size as looked up; null or missing when not recorded. */
+  starRunSize?: number | null;
 };
 
 function finite(n: unknown): number {
@@ -61,7 +73,10 @@ function signed(n: number): string {
 // Most notes score the same few totals, so the last sentence is reused rather than rebuilt.
 let lastSuggestion = { points: Number.NaN, threshold: Number.NaN, text: '' };
 
-function suggestionFor(points: number, threshold: number, keep: boolean): string {
+function suggestionFor(points: number, threshold: number, keep: boolean, checkRun: boolean): string {
+  if (checkRun && !keep) {
+    return `${points} points, under the keep threshold of ${threshold}; it is a star note: look up its run size before it goes back in the strap (runs of ${SMALL_STAR_RUN.toLocaleString('en-US')} or fewer are small).`;
+  }
   if (lastSuggestion.points === points && lastSuggestion.threshold === threshold) return lastSuggestion.text;
   const text = keep
     ? `${points} points, at or over the keep threshold of ${threshold}: keep it.`
@@ -81,6 +96,7 @@ function line(kind: ScoreLine['kind'], label: string, points: number): ScoreLine
  *          + weights.runs[longestRun]        (longestRun ≥ 3)
  *          + weights.counts[maxDigitCount]   (maxDigitCount ≥ 4)
  *          + weights.starBonus               (star notes)
+ *          + weights.smallStarRunBonus       (star notes with a recorded run ≤ 640,000)
  *          + weights.watchBonus × matched watch patterns
  *
  * `low` is re-judged against `weights.lowLimit`, so one reading can be scored
@@ -115,7 +131,10 @@ export function scoreAt(reading: ScoreInput, weights: WeightTable, lowLimit: num
     const w = finite(weights?.counts?.[reading.maxDigitCount as 4]);
     if (w !== 0) lines.push(line('count', `one digit ${reading.maxDigitCount} times`, w));
   }
-  if (reading.star) lines.push(line('star', 'star note', finite(weights?.starBonus)));
+  if (reading.star) {
+    lines.push(line('star', 'star note', finite(weights?.starBonus)));
+    if (isSmallStarRun(reading.starRunSize)) lines.push(line('star-run', 'small star run', finite(weights?.smallStarRunBonus)));
+  }
   const watch = reading.watch;
   if (watch) {
     for (const w of watch) if (w.matched) lines.push(line('watch', `watch ${w.text}`, finite(weights?.watchBonus)));
@@ -125,5 +144,6 @@ export function scoreAt(reading: ScoreInput, weights: WeightTable, lowLimit: num
   const points = round(sum);
   const keepThreshold = finite(weights?.keepThreshold);
   const keep = points >= keepThreshold;
-  return { points, lines, keep, keepThreshold, suggestion: suggestionFor(points, keepThreshold, keep) };
+  const checkRun = reading.star && typeof reading.starRunSize !== 'number';
+  return { points, lines, keep, keepThreshold, suggestion: suggestionFor(points, keepThreshold, keep, checkRun) };
 }

@@ -1,5 +1,5 @@
 import { lowerBound, membersOf } from './_lib/members';
-import { idsToMask, isPatternId, maskToIds } from './_lib/pattern-bits';
+import { MASK_COUNT, idsToMask, isPatternId, maskToIds } from './_lib/pattern-bits';
 import { DOMAIN_LAST, serialValue, toDigits } from './_lib/serial-value';
 import { DEFAULT_LOW_LIMIT, HIGH_FROM, PATTERN_IDS, isLowLimit, patternMask } from './patterns';
 import type { LowLimit, PatternId, SerialInput, SweepHit, SweepResult } from './types';
@@ -11,7 +11,7 @@ let sharedIds: ReadonlyArray<readonly PatternId[]> | null = null;
 
 /** One frozen id list per mask, shared by all hits: a sweep can return 80,000 hits. */
 function idsFor(mask: number): readonly PatternId[] {
-  sharedIds ??= Array.from({ length: 1024 }, (_, m) => Object.freeze(maskToIds(m)));
+  sharedIds ??= Array.from({ length: MASK_COUNT }, (_, m) => Object.freeze(maskToIds(m)));
   return sharedIds[mask]!;
 }
 
@@ -61,11 +61,13 @@ function union(lists: Uint32Array[]): Uint32Array {
  * patterns by default), ascending, each with the requested patterns it has.
  * Jumps from member to member by merging the patterns' sorted member lists
  * (the low and high bands are plain intervals), so the cost follows the number
- * of hits, not the length of the range. A range that would pass 99999999
- * stops there (`truncated: true`). Each hit's `patterns` list is frozen and
+ * of hits, not the length of the range. A range that would pass 99999999,
+ * or `options.last` (a denomination's run end, see `runEndFor`), stops there
+ * (`truncated: true`). Each hit's `patterns` list is frozen and
  * shared between hits with the same patterns (a sweep can return 80,000 hits).
  * Throws RangeError when `first` is not a
- * serial, `count` is not 1…10,000,000 or a pattern id is unknown.
+ * serial, `count` is not 1…10,000,000, `last` is below `first` or a pattern
+ * id is unknown.
  *
  * @example
  * sweep('11111100', 100, ['solid', 'binary']).hits.map((h) => h.serial)
@@ -75,7 +77,7 @@ export function sweep(
   first: SerialInput,
   count: number,
   patterns: readonly PatternId[] = PATTERN_IDS,
-  options: { lowLimit?: LowLimit } = {},
+  options: { lowLimit?: LowLimit; last?: number } = {},
 ): SweepResult {
   const start = serialValue(first, 'sweep');
   if (!Number.isInteger(count) || count < 1 || count > MAX_SWEEP) {
@@ -85,8 +87,12 @@ export function sweep(
   for (const id of patterns) if (!isPatternId(id)) throw new RangeError(`sweep: unknown pattern ${JSON.stringify(id)}`);
   const lowLimit = options.lowLimit ?? DEFAULT_LOW_LIMIT;
   if (!isLowLimit(lowLimit)) throw new RangeError('sweep: lowLimit must be 9, 99, 999, 9999 or 99999');
+  const end = options.last ?? DOMAIN_LAST;
+  if (!Number.isInteger(end) || end < start || end > DOMAIN_LAST) {
+    throw new RangeError(`sweep: last must be a whole number from the first serial to 99999999, got ${String(options.last)}`);
+  }
   const wanted = PATTERN_IDS.filter((id) => patterns.includes(id));
-  const last = Math.min(DOMAIN_LAST, start + count - 1);
+  const last = Math.min(end, start + count - 1);
   const wantedMask = idsToMask(wanted);
   const values = wanted.length === 0 ? new Uint32Array(0) : union(wanted.map((id) => membersIn(id, start, last, lowLimit)));
   // Each serial's requested patterns come from its own mask: exact, and no bookkeeping across lists.
@@ -99,7 +105,7 @@ export function sweep(
     first: start,
     last,
     count: last - start + 1,
-    truncated: start + count - 1 > DOMAIN_LAST,
+    truncated: start + count - 1 > end,
     patterns: wanted,
     hits,
   };

@@ -3,9 +3,12 @@
  * (JSON-safe) so a reading can cross the API boundary unchanged.
  */
 
-import type { TradeNote } from '../trade/types';
+import type { NoteType, TradeNote } from '../trade/types';
 
-/** The ten pattern ids, kebab-case, as used in code, the API and the CLI. */
+/**
+ * The pattern ids, kebab-case, as used in code, the API and the CLI. Their
+ * order (and so the bit of each in a stored mask) is PATTERN_IDS.
+ */
 export type PatternId =
   | 'solid'
   | 'ladder'
@@ -16,10 +19,12 @@ export type PatternId =
   | 'binary'
   | 'trinary'
   | 'low'
-  | 'high';
+  | 'high'
+  | 'super-radar'
+  | 'true-binary';
 
 /** Patterns that have near misses (the dense ones and the low/high bands have none). */
-export type NearMissPatternId = 'binary' | 'trinary' | 'solid' | 'radar' | 'repeater' | 'ladder';
+export type NearMissPatternId = 'binary' | 'trinary' | 'solid' | 'radar' | 'repeater' | 'ladder' | 'super-radar' | 'true-binary';
 
 /** Patterns that have neighbours: every pattern but `low` and `high`, which are plain intervals. */
 export type NeighbourPatternId = Exclude<PatternId, 'low' | 'high'>;
@@ -63,8 +68,12 @@ export interface ParsedSerial {
   suffix: string;
   /** True when a star (`*` or ★) was given before the digits or in place of the suffix. */
   star: boolean;
-  /** The district letter A–L read from the prefix, or null when there is no prefix. */
+  /** True when the star came before the digits (the older note types' place for it). */
+  starBefore: boolean;
+  /** The district letter A–L read from the prefix, or null when there is no prefix (or it is an older note's block letter). */
   district: string | null;
+  /** The first of two prefix letters (the series letter of a redesigned note), else null. */
+  seriesLetter: string | null;
   /** `modern` = two prefix letters, `older` = one, `bare` = digits only. */
   style: 'modern' | 'older' | 'bare';
 }
@@ -201,6 +210,8 @@ export interface WeightTable {
   lowLimit: LowLimit;
   /** Added once when the note is a star note. */
   starBonus: number;
+  /** Added once more when a star note's recorded run is small (640,000 notes or fewer). */
+  smallStarRunBonus: number;
   /** Added for each watch pattern the serial matches. */
   watchBonus: number;
   /** A note whose points reach this is suggested as a keeper. */
@@ -208,7 +219,7 @@ export interface WeightTable {
 }
 
 export interface ScoreLine {
-  kind: 'pattern' | 'run' | 'count' | 'star' | 'watch';
+  kind: 'pattern' | 'run' | 'count' | 'star' | 'star-run' | 'watch';
   /** What earned the points, e.g. "super repeater" or "watch 12??1990". */
   label: string;
   points: number;
@@ -244,10 +255,21 @@ export interface ReadOptions {
   district?: string;
   /** Printing facility: 'DC' (Washington) or 'FW' (Fort Worth). */
   facility?: 'DC' | 'FW';
-  /** Face value in dollars; trade notes about $1 notes are skipped for other values. */
+  /**
+   * Face value in dollars: trade notes about other values are skipped, the
+   * serial format is checked against it, and neighbours stop at its run end
+   * (96,000,000 for $1–$20, 99,200,000 for $50 and $100).
+   */
   denomination?: number;
-  /** Last serial of the odds domain (default 99,999,999; see TRADE.md on 96,000,000). */
-  domainLast?: number;
+  /**
+   * Last serial of the odds domain (default 99,999,999), or `'run-end'` for the
+   * denomination's run end (the full domain when no denomination is given).
+   */
+  domainLast?: number | 'run-end';
+  /** Federal Reserve note (default) or an older note type with a block letter. */
+  noteType?: NoteType;
+  /** The star run's size as the hunter looked it up (scores the small-run bonus). */
+  starRunSize?: number | null;
 }
 
 /** The engine's verdict for one serial. */
@@ -257,9 +279,13 @@ export interface Reading extends Features {
   digits: string;
   value: number;
   prefix: string;
+  /** The series letter of a two-letter prefix, else null. */
+  seriesLetter: string | null;
   suffix: string;
   star: boolean;
   district: string | null;
+  /** The last serial neighbours may point to: the denomination's run end, else 99,999,999. */
+  runEnd: number;
   lowLimit: LowLimit;
   patterns: PatternId[];
   nearMiss: Record<NearMissPatternId, NearMiss>;
@@ -287,32 +313,56 @@ export interface SweepHit {
 
 export interface SweepResult {
   first: number;
-  /** Last serial looked at (stops at 99,999,999). */
+  /** Last serial looked at (stops at 99,999,999, or at the run end given). */
   last: number;
   /** Serials looked at: last − first + 1. */
   count: number;
-  /** True when the requested count ran past 99,999,999 and was cut there. */
+  /** True when the requested count ran past 99,999,999 (or the run end given) and was cut there. */
   truncated: boolean;
   patterns: PatternId[];
   hits: SweepHit[];
 }
 
+/**
+ * How a count compares with chance at the 95% level: `more` or `fewer` when
+ * its tail is 5% or less, `as-chance` otherwise, and `no-comparison` when no
+ * count on its side could be unusual (e.g. most straps hold no radar at all).
+ */
+export type ChanceVerdict = 'more' | 'fewer' | 'as-chance' | 'no-comparison';
+
 export interface ExpectedRow {
   id: PatternId;
-  /** Chance that one random serial of the domain has the pattern. */
+  /** Chance that one note has the pattern (for a run in sequence: expected ÷ notes). */
   probability: number;
-  /** notes × probability. */
+  /** The mean count: notes × probability. */
   expected: number;
   /** The count given by the caller, or null. */
   actual: number | null;
-  /** Poisson P(X ≥ actual) with mean `expected`; null when no actual was given. */
+  /** P(X ≥ actual): Poisson for circulated notes, the exact run distribution for notes in sequence; null without an actual. */
   pAtLeast: number | null;
+  /** P(X ≤ actual), the same way; null without an actual. */
+  pAtMost: number | null;
+  /** The verdict at the 95% level; null without an actual. */
+  verdict: ChanceVerdict | null;
 }
 
 export interface ExpectedHits {
   notes: number;
   lowLimit: LowLimit;
+  /** True when the figures are for one run of new notes in sequence, false for circulated notes (Poisson). */
+  inSequence: boolean;
   rows: ExpectedRow[];
-  /** Why the Poisson figures are a guide only (sequential straps). */
+  /** What the figures compare against and why. */
   caveat: string;
+}
+
+/** A pattern's count in a run of consecutive serials, over every possible starting serial. */
+export interface RunDistribution {
+  id: PatternId;
+  runLength: number;
+  /** How many starting serials there are: domain last − run length + 1. */
+  starts: number;
+  /** probabilities[k]: the share of starts whose run holds exactly k members. */
+  probabilities: number[];
+  mean: number;
 }

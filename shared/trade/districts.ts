@@ -1,7 +1,7 @@
+import { BEP_DISTRICTS } from './references';
 import type { District } from './types';
 
-const RESERVE_BANKS =
-  "Federal Reserve Act of 1913; the Federal Reserve Board's published list of Reserve Banks";
+const RESERVE_BANKS = BEP_DISTRICTS;
 
 /** The twelve Federal Reserve districts, letter A–L, with number and bank. */
 export const DISTRICTS: readonly District[] = [

@@ -1,3 +1,4 @@
+import { BEP_FACILITIES } from './references';
 import type { Facility } from './types';
 
 /** The two facilities that print US notes. */
@@ -6,13 +7,15 @@ export const FACILITIES: readonly Facility[] = [
     code: 'DC',
     name: 'Washington, DC',
     mark: 'no facility mark beside the face check (plate) number',
-    source: 'common practice',
+    source: 'published',
+    reference: BEP_FACILITIES,
   },
   {
     code: 'FW',
     name: 'Fort Worth, Texas',
-    mark: 'a small "FW" beside the face check (plate) number',
-    source: 'common practice',
+    mark: 'a small "FW" before the face check (plate) number',
+    source: 'published',
+    reference: BEP_FACILITIES,
   },
 ];
 

@@ -46,11 +46,25 @@ export interface TradeNote extends Sourced {
   text: string;
 }
 
-/** What the caller knows about a note beyond its serial. */
+/** Federal Reserve notes (the default) or the older types with a block letter. */
+export type NoteType = 'federal-reserve' | 'older';
+
+/** What the caller knows about a note: its serial's parts when read, and what the hunt or keeper says. */
 export interface NoteFacts {
   series?: string;
   district?: string | null;
   facility?: 'DC' | 'FW';
   star?: boolean;
   denomination?: number;
+  /** The serial's value, 1…99,999,999, when a serial was read. */
+  value?: number;
+  /** Prefix letters as typed ('' for digits only). */
+  prefix?: string;
+  /** Suffix letter as typed ('' when none). */
+  suffix?: string;
+  /** True when the star was typed before the digits. */
+  starBefore?: boolean;
+  noteType?: NoteType;
+  /** The star run's size as the hunter looked it up, when they did. */
+  starRunSize?: number | null;
 }

@@ -1,6 +1,6 @@
 import { fireEvent, render, screen, within } from '@testing-library/react';
 import { describe, expect, it, vi } from 'vitest';
-import { parseSerial, sweep, type ParsedSerial } from '@shared/engine';
+import { PATTERN_IDS, parseSerial, sweep, type ParsedSerial } from '@shared/engine';
 import { SweepForm } from '../../src/features/sweep/components/sweep-form';
 import { SweepResults, sweepHeadline } from '../../src/features/sweep/components/sweep-results';
 import { sweepCsv, sweepFileName } from '../../src/features/sweep/sweep-csv';
@@ -42,7 +42,7 @@ describe('the sweep form', () => {
     expect(request.count).toBe(4000);
     expect(request.serial).toMatchObject({ digits: '12345600', prefix: 'MB', suffix: 'A', value: 12345600 });
     expect(request.patterns).not.toContain('low');
-    expect(request.patterns).toHaveLength(9);
+    expect(request.patterns).toHaveLength(PATTERN_IDS.length - 1);
   });
 
   it('when a count is typed by hand, then the matching preset lights up', () => {

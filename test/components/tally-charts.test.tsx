@@ -20,7 +20,9 @@ vi.mock('react-native-svg', () => {
 });
 
 /** Figures as the server builds them: the engine's expected hits for the actual counts given. */
-function figures(notes: number, actual: Partial<Record<PatternId, number>>) {
+function figures(notes: number, found: Partial<Record<PatternId, number>>) {
+  // The server counts every pattern, so a pattern not named was found 0 times.
+  const actual = Object.fromEntries(PATTERN_IDS.map((id) => [id, found[id] ?? 0])) as Record<PatternId, number>;
   const expected = expectedHits(notes, actual);
   const patterns: TallyPatternRow[] = expected.rows.map((row) => ({
     id: row.id,
@@ -30,8 +32,10 @@ function figures(notes: number, actual: Partial<Record<PatternId, number>>) {
     probability: row.probability,
     expected: row.expected,
     pAtLeast: row.pAtLeast ?? 1,
+    pAtMost: row.pAtMost ?? 1,
+    verdict: row.verdict ?? 'no-comparison',
   }));
-  return { notes, patterns, caveat: expected.caveat };
+  return { notes, patterns, basis: 'poisson' as const, caveat: expected.caveat };
 }
 
 describe('the per-pattern chart against chance', () => {
@@ -52,9 +56,12 @@ describe('the per-pattern chart against chance', () => {
     // P(X ≥ 30) for a Poisson mean of 27.82 is 0.3644 (Python's math module): about chance.
     expect(cells[4]).toBe('36%at least 30: about chance');
     const binary = rows.find((row) => row.textContent?.startsWith('binary'))!;
-    // Radar: none found where 0.4 are expected is unremarkable, so no chance is shown.
+    // Radar: none found where 0.4 are expected: P(0) = e^−0.4 = 0.67, so no count this low could stand out.
     const radar = rows.find((row) => row.textContent?.startsWith('radar'))!;
-    expect(within(radar).getAllByRole('cell').map((cell) => cell.textContent).slice(3)).toEqual(['0.4', '—about chance']);
+    expect(within(radar).getAllByRole('cell').map((cell) => cell.textContent).slice(3)).toEqual([
+      '0.4',
+      '—no comparison: chance alone often gives this',
+    ]);
     // Four binaries where 4000 × 11,430 / 99,999,999 = 0.4572 are expected: P(X ≥ 4) = 1 − Σ₀³ e^−λ λ^k / k!
     // = 0.0012665 (worked in Python's math module), 1 in 790.
     expect(within(binary).getAllByRole('cell').map((cell) => cell.textContent)).toEqual(['binary', '4', '1', '0.46', '1 in 790at least 4: more than chance']);
@@ -66,7 +73,7 @@ describe('the per-pattern chart against chance', () => {
     expect(chart.getAttribute('aria-label')).toBe(
       'Hits found against hits expected by chance in 4,000 notes. More than chance: binary.',
     );
-    // 100 notes with no hits: the likeliest pattern, trinary, expects 0.7, and P(X = 0) ≈ 0.5.
+    // 100 notes with no finds: the likeliest pattern, trinary, expects 0.7, and P(X = 0) ≈ 0.5: no comparison.
     expect(chanceSummary(figures(100, {}))).toBe('Hits found against hits expected by chance in 100 notes. Every pattern is about what chance predicts.');
     // 1,000 notes with no trinary where 6.96 are expected: P(X = 0) = e^−6.96 ≈ 0.00095, a picked-over bank.
     expect(chanceSummary(figures(1000, {}))).toBe('Hits found against hits expected by chance in 1,000 notes. Fewer than chance: trinary.');
@@ -140,21 +147,32 @@ describe('tally numbers', () => {
     expect(formatRate(7.254)).toBe('7.25');
   });
 
+  /**
+   * A row as the server builds it for circulated notes: the engine's Poisson tails and verdict. The mean is
+   * reached through solids (9 in 99,999,999), whose expected count is notes × 9 ÷ 99,999,999.
+   */
+  function poissonRow(hits: number, expected: number) {
+    const notes = Math.round((expected * 99_999_999) / 9);
+    const r = expectedHits(notes, { solid: hits }).rows[0]!;
+    return { hits, expected: r.expected, pAtLeast: r.pAtLeast!, pAtMost: r.pAtMost!, verdict: r.verdict! };
+  }
+
   it('gives the chance by luck in the direction of the miss', () => {
-    expect(luck(4, 0.4572, 0.0012665)).toEqual({ p: 0.0012665, direction: 'at least' });
+    expect(luck({ hits: 4, expected: 0.4572, pAtLeast: 0.0012665, pAtMost: 0.9999, verdict: 'more' })).toEqual({ p: 0.0012665, direction: 'at least' });
     // One trinary where 9.7 are expected: P(X ≤ 1) = e^−9.7 (1 + 9.7) = 0.000656 (Python's math module).
-    const low = luck(1, 9.7, 1)!;
+    const low = luck(poissonRow(1, 9.7))!;
     expect(low.direction).toBe('at most');
     expect(low.p).toBeCloseTo(0.0006557, 6);
-    expect(luck(0, 0.00013, 1)).toBeNull();
+    expect(luck(poissonRow(0, 0.00013))).toBeNull();
   });
 
-  it('calls a count lucky or thin only when chance makes it unlikely', () => {
-    expect(verdict(4, 0.457, 0.00083)).toBe('lucky');
-    expect(verdict(30, 27.8, 0.36)).toBe('chance');
+  it('takes the server’s verdict: more or fewer only when chance makes the count unlikely, and no comparison where none can be made', () => {
+    expect(verdict(poissonRow(4, 0.457))).toBe('more');
+    expect(verdict(poissonRow(30, 27.8))).toBe('as-chance');
     // 10 where 27.8 are expected: P(X ≤ 10) = 0.0000976 (Python's math module).
-    expect(verdict(10, 27.8, 1)).toBe('thin');
-    expect(verdict(0, 0.46, 1)).toBe('chance');
+    expect(verdict(poissonRow(10, 27.8))).toBe('fewer');
+    // None where 0.46 are expected: P(0) = e^−0.46 = 0.63, so "fewer" could never be said.
+    expect(verdict(poissonRow(0, 0.46))).toBe('no-comparison');
   });
 
   it('checks typed dates and names the buckets in UTC', () => {

@@ -30,6 +30,9 @@ export function plainPatterns(s: string, lowLimit = 999): string[] {
   if (distinct === 3) ids.push('trinary');
   if (n >= 1 && n <= lowLimit) ids.push('low');
   if (n >= 99_990_000) ids.push('high');
+  // TRADE.md: a radar whose six inner digits are one digit; a binary of the digits 0 and 1.
+  if (ids.includes('radar') && distinct === 2 && new Set(d.slice(1, 7)).size === 1) ids.push('super-radar');
+  if (distinct === 2 && d.every((x) => x === 0 || x === 1)) ids.push('true-binary');
   return ids;
 }
 
@@ -113,6 +116,12 @@ export function plainMembers(pattern: string): number[] {
       break;
     case 'trinary':
       for (const set of digitSets(3)) strings.push(...usingExactly(set));
+      break;
+    case 'super-radar':
+      for (let a = 0; a <= 9; a++) for (let b = 0; b <= 9; b++) if (a !== b) strings.push(`${a}${String(b).repeat(6)}${a}`);
+      break;
+    case 'true-binary':
+      strings = usingExactly(['0', '1']);
       break;
     default:
       throw new Error(`no plain member list for ${pattern}`);

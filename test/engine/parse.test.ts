@@ -12,14 +12,16 @@ describe('parseSerial', () => {
       prefix: '',
       suffix: '',
       star: false,
+      starBefore: false,
       district: null,
+      seriesLetter: null,
       style: 'bare',
     });
   });
 
   it('when a modern serial with two prefix letters and a suffix is pasted, then the second prefix letter is the district', () => {
     const result = parseSerial('MB 04071776 C');
-    expect(result).toMatchObject({ ok: true, prefix: 'MB', suffix: 'C', district: 'B', style: 'modern', star: false });
+    expect(result).toMatchObject({ ok: true, prefix: 'MB', suffix: 'C', district: 'B', seriesLetter: 'M', style: 'modern', star: false });
   });
 
   it('when an older serial with one prefix letter is typed, then that letter is the district', () => {

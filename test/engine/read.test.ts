@@ -91,13 +91,14 @@ describe('read', () => {
     ]);
   });
 
-  it('when series 2013, district B and a star are given for a $1 note, then the duplicate-serial warning says to check the facility mark', () => {
-    const r = read('MB 1234 5678 *', { series: '2013', denomination: 1 });
+  it('when a series 2013 $1 New York star in a duplicated range is read, then the warning explains the facility mark and the matched pair (hobby press, checked from memory)', () => {
+    const r = read('B 0500 0000 *', { series: '2013', denomination: 1 });
     if (!r.ok) throw new Error('must read');
     const warning = r.trade.find((n) => n.id === 'duplicate-star-serials');
-    expect(warning?.text).toContain('check the facility mark');
-    expect(warning?.source).toBe('common practice');
-    const regular = read('MB 1234 5678 A', { series: '2013', denomination: 1 });
+    expect(warning?.text).toContain('facility mark tells them apart');
+    expect(warning?.text).toContain('matched pair carries the premium');
+    expect(warning?.source).toBe('published');
+    const regular = read('B 0500 0000 A', { series: '2013', denomination: 1 });
     if (!regular.ok) throw new Error('must read');
     expect(regular.trade.map((n) => n.id)).not.toContain('duplicate-star-serials');
   });

@@ -11,11 +11,15 @@ function reading(text: string, options: Parameters<typeof read>[1] = {}): Readin
 }
 
 const flat: WeightTable = {
-  patterns: { solid: 1, ladder: 1, radar: 1, repeater: 1, 'super-repeater': 1, rotator: 1, binary: 1, trinary: 1, low: 1, high: 1 },
+  patterns: {
+    solid: 1, ladder: 1, radar: 1, repeater: 1, 'super-repeater': 1, rotator: 1, binary: 1, trinary: 1, low: 1, high: 1,
+    'super-radar': 1, 'true-binary': 1,
+  },
   runs: {},
   counts: {},
   lowLimit: 999,
   starBonus: 0,
+  smallStarRunBonus: 0,
   watchBonus: 0,
   keepThreshold: 2,
 };

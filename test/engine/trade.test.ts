@@ -47,11 +47,12 @@ describe('trade data', () => {
     for (const fact of all) expect(LABELS).toContain(fact.source);
   });
 
-  it('when the facilities are listed, then Fort Worth notes carry FW and Washington notes none (common practice)', () => {
+  it('when the facilities are listed, then Fort Worth notes carry FW and Washington notes none (BEP, TRADE.md "Printing"; checked from memory)', () => {
     expect(FACILITIES.map((f) => [f.code, f.source])).toEqual([
-      ['DC', 'common practice'],
-      ['FW', 'common practice'],
+      ['DC', 'published'],
+      ['FW', 'published'],
     ]);
+    expect(FACILITIES.every((f) => f.reference?.includes('Bureau of Engraving and Printing'))).toBe(true);
     expect(FACILITIES.find((f) => f.code === 'FW')?.mark).toContain('FW');
   });
 
@@ -77,18 +78,22 @@ describe('tradeNotes', () => {
     expect(note?.source).toBe('common practice');
   });
 
-  it('when a 2013 district B star is given, then the warning applies; a district C star or a B regular note gets none', () => {
+  it('when a 2013 district B star inside a duplicated range is given, then the warning applies; a district C star or a B regular note gets none', () => {
     const has = (facts: Parameters<typeof tradeNotes>[0]) => tradeNotes(facts).some((n) => n.id === 'duplicate-star-serials');
-    expect(has({ series: '2013', district: 'B', star: true })).toBe(true);
-    expect(has({ series: '2013', district: 'C', star: true })).toBe(false);
-    expect(has({ series: '2013', district: 'B', star: false })).toBe(false);
+    expect(has({ series: '2013', district: 'B', star: true, value: 100 })).toBe(true);
+    expect(has({ series: '2013', district: 'C', star: true, value: 100 })).toBe(false);
+    expect(has({ series: '2013', district: 'B', star: false, value: 100 })).toBe(false);
+  });
+
+  it('when a 2013 district B star is given without its serial, then no duplicate warning is guessed (only two ranges were duplicated)', () => {
+    expect(tradeNotes({ series: '2013', district: 'B', star: true }).map((n) => n.id)).not.toContain('duplicate-star-serials');
   });
 
   it('when the facility and district are given, then their notes come first, each with its source label', () => {
     const notes = tradeNotes({ district: 'K', facility: 'FW' });
     expect(notes.map((n) => [n.id, n.source])).toEqual([
       ['district', 'published'],
-      ['facility', 'common practice'],
+      ['facility', 'published'],
     ]);
     expect(notes[0]!.text).toBe('District K (11): Dallas.');
   });

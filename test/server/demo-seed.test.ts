@@ -1,6 +1,6 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { classify, parseSerial } from '../../shared/engine';
+import { classify, parseSerial, read } from '../../shared/engine';
 import type { PatternId } from '../../shared/engine';
 import { adminUserPage } from '../../shared/contracts/admin';
 import { authResponse } from '../../shared/contracts/auth';
@@ -8,7 +8,7 @@ import { huntList } from '../../shared/contracts/hunts';
 import { keeperList } from '../../shared/contracts/keepers';
 import { strapSheet } from '../../shared/contracts/straps';
 import { DEMO_ADMIN, DEMO_COLLECTOR, DEMO_CREW } from '../../server/db/seed/demo-accounts';
-import { DEMO_HUNTS } from '../../server/db/seed/demo-data';
+import { DEMO_HUNTS, demoId } from '../../server/db/seed/demo-data';
 import { seedDemo } from '../../server/db/seed/demo-seed';
 import { config } from '../../server/config';
 import { createObjectStore } from '../../server/lib/object-store';
@@ -82,15 +82,15 @@ describe('the demo seed', () => {
 
   it('when the invented finds are read by the engine, then each has the pattern it was chosen for', () => {
     const intended: Record<string, PatternId[]> = {
-      MB27311372E: ['radar'],
+      B27311372E: ['radar'],
       '61199119': ['trinary'],
       '33030303': ['binary'],
-      PL46464646A: ['repeater', 'super-repeater', 'binary'],
+      L46464646A: ['repeater', 'super-repeater', 'binary'],
       '00000417': ['low'],
       '61600919': ['rotator'],
       '55555155': ['binary'],
       '82288228': ['radar', 'repeater', 'binary'],
-      KF40177104B: ['radar'],
+      F40177104B: ['radar'],
       'ME40829163*': [],
     };
     const finds = DEMO_HUNTS.flatMap((h) => h.finds.map((f) => f.serial));
@@ -101,6 +101,32 @@ describe('the demo seed', () => {
       expect(classify(parsed.digits), serial).toEqual(patterns);
     }
     expect(parseSerial('ME40829163*')).toMatchObject({ ok: true, star: true });
+  });
+
+  it('when every demo note is read with its hunt’s face value, then none breaks the serial format or passes the run end (TRADE.md; BEP serial numbers)', async () => {
+    await seedDemo(api.dataSource);
+    const rows: Array<{ serial: string; denomination: number }> = await api.dataSource.query(
+      `SELECT s.serial, h.denomination FROM scans s JOIN hunts h ON h.id = s.hunt_id WHERE h.id = ANY($1)`,
+      [DEMO_HUNTS.map((h) => demoId(h.key))],
+    );
+    expect(rows.length).toBeGreaterThan(1000);
+    const wrong = new Set(['serial-format', 'series-letter-mismatch', 'run-end', 'suffix-letter', 'star-position']);
+    const problems = rows.flatMap((row) => {
+      const r = read(row.serial, { denomination: row.denomination });
+      return r.ok ? r.trade.filter((n) => wrong.has(n.id)).map((n) => `${row.serial}: ${n.text}`) : [`${row.serial}: unreadable`];
+    });
+    expect(problems).toEqual([]);
+    const keepers: Array<{ serial: string; denomination: number | null; series: string | null }> = await api.dataSource.query(
+      `SELECT serial, denomination, series FROM keepers`,
+    );
+    for (const k of keepers) {
+      const r = read(k.serial, { denomination: k.denomination ?? undefined, series: k.series ?? undefined });
+      expect(r.ok && r.trade.filter((n) => wrong.has(n.id)).map((n) => n.text), k.serial).toEqual([]);
+    }
+    const inSequence: Array<{ in_sequence: boolean }> = await api.dataSource.query(`SELECT in_sequence FROM hunts WHERE id = $1`, [
+      demoId('hunt:october-twos'),
+    ]);
+    expect(inSequence[0]!.in_sequence).toBe(true);
   });
 
   it('when the collector opens keepers, then grades, values and every status appear', async () => {

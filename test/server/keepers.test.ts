@@ -205,3 +205,26 @@ describe('GET, PATCH and DELETE /api/keepers/:id', () => {
     expect(after).toMatchObject({ digits: '80088008', huntId: null, scanId: null });
   });
 });
+
+describe('keepers: original paper and star runs (TRADE.md: our own yes/no; run sizes the hunter looked up)', () => {
+  it('when a star keeper records a small run, then the small-run bonus is in its points; a large run or none earns no bonus', async () => {
+    const small = await typeIn(owner, { serial: 'B 2345 6791 *', denomination: 1, starRunSize: 320_000, originalPaper: true });
+    const large = await typeIn(owner, { serial: 'B 2345 6792 *', denomination: 1, starRunSize: 3_200_000, originalPaper: false });
+    const none = await typeIn(owner, { serial: 'B 2345 6793 *', denomination: 1 });
+    expect([small.originalPaper, large.originalPaper, none.originalPaper]).toEqual([true, false, null]);
+    expect(small.starRunSize).toBe(320_000);
+    expect(small.points - large.points).toBe(DEFAULT_WEIGHTS.smallStarRunBonus);
+    expect(large.points).toBe(none.points);
+    expect(none.reading.score.suggestion).toContain('look up its run size');
+
+    const patched = keeperDetail.parse(
+      (await request(api.app).patch(`/api/keepers/${none.id}`).set(owner.auth).send({ starRunSize: 640_000 }).expect(200)).body,
+    );
+    expect(patched.points).toBe(none.points + DEFAULT_WEIGHTS.smallStarRunBonus);
+  });
+
+  it('when a $1 keeper is typed in with two prefix letters, then its reading warns that $1 notes carry one (BEP serial numbers)', async () => {
+    const keeper = await typeIn(owner, { serial: 'MB 2345 6794 A', denomination: 1, series: '2017' });
+    expect(keeper.reading.trade.find((n) => n.id === 'serial-format')?.text).toContain('$1 notes carry one prefix letter: the district.');
+  });
+});

@@ -14,11 +14,15 @@ const tables: WeightTable[] = [
   DEFAULT_WEIGHTS,
   ...([9, 99, 9999, 99999] as LowLimit[]).map((lowLimit) => ({ ...DEFAULT_WEIGHTS, lowLimit })),
   {
-    patterns: { solid: 3, ladder: -2, radar: 7.5, repeater: 0, 'super-repeater': 1, rotator: 2, binary: 6, trinary: 0.5, low: 9, high: -1 },
+    patterns: {
+      solid: 3, ladder: -2, radar: 7.5, repeater: 0, 'super-repeater': 1, rotator: 2, binary: 6, trinary: 0.5, low: 9, high: -1,
+      'super-radar': 2, 'true-binary': 1.5,
+    },
     runs: { 3: 1, 5: 4, 8: 10 },
     counts: { 4: 0.25, 6: 3 },
     lowLimit: 9999,
     starBonus: 2.5,
+    smallStarRunBonus: 1,
     watchBonus: 4,
     keepThreshold: 3,
   },
@@ -39,13 +43,14 @@ const serialText = fc
 const anyText = fc.oneof(serialText, fc.string({ maxLength: 20 }));
 
 describe('the stored reading of a scan', () => {
-  it('when any serial is read for storage, then every stored field equals the engine’s read() with the same table, watch patterns and star', () => {
+  it('when any serial is read for storage, then every stored field equals the engine’s read() with the same table, watch patterns, star and star run', () => {
+    const runSizes = fc.constantFrom(null, 320_000, 640_000, 3_200_000);
     fc.assert(
-      fc.property(anyText, fc.integer({ min: 0, max: tables.length - 1 }), fc.boolean(), fc.boolean(), (text, tableIndex, star, withWatch) => {
+      fc.property(anyText, fc.integer({ min: 0, max: tables.length - 1 }), fc.boolean(), fc.boolean(), runSizes, (text, tableIndex, star, withWatch, starRunSize) => {
         const weights = tables[tableIndex]!;
         const patterns: WatchPattern[] = withWatch ? watch : [];
-        const engine = read(text, { weights, watch: patterns, star });
-        const stored = storedReading(text, { weights, watch: patterns }, { star });
+        const engine = read(text, { weights, watch: patterns, star, starRunSize });
+        const stored = storedReading(text, { weights, watch: patterns }, { star, starRunSize });
         if (!engine.ok) {
           expect(stored).toEqual({ ok: false, message: engine.error.message });
           return;

@@ -56,14 +56,28 @@ describe('share links', () => {
     expect(shared.photos).toHaveLength(1);
     const photo = await request(api.app).get(shared.photos[0]!.url);
     expect(photo.status).toBe(200);
-    expect(photo.headers['content-type']).toBe('image/png');
+    // Only the small copy leaves through a share link (TRADE.md: a shared picture should be small and one-sided).
+    expect(photo.headers['content-type']).toBe('image/jpeg');
     expect((await request(api.app).get(shared.photos[0]!.thumbUrl)).headers['content-type']).toBe('image/jpeg');
+    expect((await request(api.app).get(`${shared.photos[0]!.url.replace(/\/thumb$/, '')}`)).headers['content-type']).toBe('image/jpeg');
 
     const status = shareStatus.parse((await request(api.app).get(`/api/keepers/${keeper.id}/share`).set(owner.auth)).body);
     expect(status.active?.id).toBe(link.id);
     expect(status.active?.url).toBeUndefined();
     const stored: Array<{ token_hash: string }> = await api.dataSource.query('SELECT token_hash FROM share_links WHERE id = $1', [link.id]);
     expect(stored[0]!.token_hash).not.toContain(token);
+  });
+
+  it('when a keeper has a front and a back photo, then the link shows the front alone, and the back cannot be fetched through it', async () => {
+    const owner = await registerUser(api.app, 'share-one-side');
+    const keeper = await privateKeeper(owner);
+    const back = await request(api.app).post(`/api/keepers/${keeper.id}/photos`).set(owner.auth).field('side', 'back').attach('photo', drawPng(), 'b.png').expect(201);
+    const token = tokenOf(shareLinkView.parse((await request(api.app).post(`/api/keepers/${keeper.id}/share`).set(owner.auth)).body).url!);
+    const shared = sharedKeeper.parse((await request(api.app).get(`/api/share/${token}`)).body);
+    expect(shared.photos.map((p) => p.side)).toEqual(['front']);
+    const backId = photoView.parse(back.body).id;
+    expect((await request(api.app).get(`/api/share/${token}/photos/${backId}`)).status).toBe(404);
+    expect((await request(api.app).get(`/api/share/${token}/photos/${backId}/thumb`)).status).toBe(404);
   });
 
   it('when the link is revoked, then the page and its photos answer 404; a new link replaces the old one', async () => {

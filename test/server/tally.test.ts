@@ -1,6 +1,6 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEFAULT_WEIGHTS, PATTERN_IDS, classify, expectedHits } from '../../shared/engine';
+import { DEFAULT_WEIGHTS, MIXED_CAVEAT, PATTERN_IDS, SEQUENTIAL_CAVEAT, classify, expectedHits, sequentialHits } from '../../shared/engine';
 import type { PatternId } from '../../shared/engine';
 import { huntTally, periodTally } from '../../shared/contracts/tally';
 import { addCrew, createHunt, missingId, openTestApi, ordinarySerial, postBatch, registerUser, scanOf, type TestApi, type TestUser } from '../support/api';
@@ -132,5 +132,48 @@ describe('GET /api/tally', () => {
     expect(reversed.status).toBe(400);
     expect(reversed.body.error.fields).toHaveProperty('to');
     expect((await request(api.app).get('/api/tally')).status).toBe(401);
+  });
+});
+
+describe('tally for notes in sequence (TRADE.md: the exact distribution over every starting serial, not Poisson)', () => {
+  it('when a hunt in sequence holds a strap of 100 consecutive notes with no radar, then Tally says no comparison, not "fewer than chance", and uses the run distribution', async () => {
+    const hunt = await createHunt(api.app, owner, { inSequence: true });
+    // 40,000,100 … 40,000,199: a plain strap of new notes from a $1 block.
+    const serials = Array.from({ length: 100 }, (_, i) => String(40_000_100 + i).padStart(8, '0'));
+    await postBatch(api.app, owner, serials.map((serial) => scanOf(hunt.id, serial)));
+
+    const tally = huntTally.parse((await request(api.app).get(`/api/hunts/${hunt.id}/tally`).set(owner.auth)).body);
+
+    expect(tally.basis).toBe('sequence');
+    const counts = engineCounts(serials);
+    const engine = sequentialHits(100, counts, { lowLimit: DEFAULT_WEIGHTS.lowLimit, domainLast: 96_000_000 });
+    for (const row of engine.rows) {
+      const served = tally.patterns.find((p) => p.id === row.id)!;
+      expect(served.verdict, row.id).toBe(row.verdict);
+      expect(served.pAtMost, row.id).toBeCloseTo(row.pAtMost!, 12);
+      expect(served.expected, row.id).toBeCloseTo(row.expected, 12);
+    }
+    expect(tally.patterns.find((p) => p.id === 'radar')!.verdict).toBe('no-comparison');
+    expect(tally.patterns.some((p) => p.verdict === 'fewer')).toBe(false);
+    expect(tally.caveat).toBe(SEQUENTIAL_CAVEAT);
+  });
+
+  it('when the same notes are a circulated hunt, then Poisson judges them', async () => {
+    const hunt = await createHunt(api.app, owner);
+    await postBatch(api.app, owner, [scanOf(hunt.id, '12121212')]);
+    const tally = huntTally.parse((await request(api.app).get(`/api/hunts/${hunt.id}/tally`).set(owner.auth)).body);
+    expect(tally.basis).toBe('poisson');
+  });
+
+  it('when the period mixes hunts in sequence and circulated hunts, then it says so and combines them', async () => {
+    const user = await registerUser(api.app, 'tally-mixed');
+    const run = await createHunt(api.app, user, { inSequence: true });
+    const mixed = await createHunt(api.app, user);
+    await postBatch(api.app, user, Array.from({ length: 50 }, (_, i) => scanOf(run.id, String(30_000_000 + i).padStart(8, '0'))));
+    await postBatch(api.app, user, Array.from({ length: 50 }, (_, i) => scanOf(mixed.id, ordinarySerial(i))));
+    const tally = periodTally.parse((await request(api.app).get('/api/tally').set(user.auth)).body);
+    expect(tally.basis).toBe('mixed');
+    expect(tally.caveat).toBe(MIXED_CAVEAT);
+    expect(tally.patterns.every((p) => ['more', 'fewer', 'as-chance', 'no-comparison'].includes(p.verdict))).toBe(true);
   });
 });

@@ -129,3 +129,26 @@ describe('DELETE /api/weights/:id', () => {
     expect((await request(api.app).delete(`/api/weights/${active.id}`)).status).toBe(401);
   });
 });
+
+describe('tables saved before super radar, true binary and the small-star-run bonus', () => {
+  it('when a stored table lacks them, then it is shown and scored with their defaults and keeps every weight the user set', async () => {
+    const user = await registerUser(api.app, 'weights-older');
+    await request(api.app).get('/api/weights').set(user.auth).expect(200);
+    const older = plain();
+    delete older.patterns['super-radar'];
+    delete older.patterns['true-binary'];
+    delete older.smallStarRunBonus;
+    older.patterns.radar = 9;
+    await api.dataSource.query(`UPDATE weight_tables SET weights = $2::jsonb WHERE user_id = $1`, [user.id, JSON.stringify(older)]);
+
+    const body = weightTableList.parse((await request(api.app).get('/api/weights').set(user.auth).expect(200)).body);
+    expect(body.items[0]!.weights.patterns.radar).toBe(9);
+    expect(body.items[0]!.weights.patterns['super-radar']).toBe(DEFAULT_WEIGHTS.patterns['super-radar']);
+    expect(body.items[0]!.weights.smallStarRunBonus).toBe(DEFAULT_WEIGHTS.smallStarRunBonus);
+
+    // A client that does not know the new weights yet may still save a table without them.
+    const saved = await request(api.app).post('/api/weights').set(user.auth).send({ name: 'From an older client', weights: older });
+    expect(saved.status).toBe(201);
+    expect(weightTableView.parse(saved.body).weights.patterns['true-binary']).toBe(DEFAULT_WEIGHTS.patterns['true-binary']);
+  });
+});

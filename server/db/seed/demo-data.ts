@@ -27,7 +27,15 @@ export interface DemoFind {
   /** Position in the strap, 0…99. */
   at: number;
   serial: string;
-  keeper?: { grade: number; estimatedValueCents: number; status: 'kept' | 'traded' | 'sold' | 'spent'; series: string; facility?: 'DC' | 'FW'; notes: string };
+  keeper?: {
+    grade: number;
+    estimatedValueCents: number;
+    status: 'kept' | 'traded' | 'sold' | 'spent';
+    series: string;
+    facility?: 'DC' | 'FW';
+    originalPaper?: boolean;
+    notes: string;
+  };
 }
 
 /** Swaps are recorded for every pulled note unless the strap is listed in `unswapped`. */
@@ -75,7 +83,7 @@ export const DEMO_HUNTS: DemoHunt[] = [
       {
         strap: 2,
         at: 41,
-        serial: 'MB27311372E',
+        serial: 'B27311372E',
         keeper: { grade: 30, estimatedValueCents: 1500, status: 'kept', series: '2017A', notes: 'Radar, light fold at centre.' },
       },
       { strap: 4, at: 7, serial: '61199119' },
@@ -112,7 +120,7 @@ export const DEMO_HUNTS: DemoHunt[] = [
         strap: 1,
         at: 63,
         serial: 'ME40829163*',
-        keeper: { grade: 58, estimatedValueCents: 2200, status: 'traded', series: '2021', facility: 'FW', notes: 'Star note; traded at the club for a 1995 web note.' },
+        keeper: { grade: 58, estimatedValueCents: 2200, status: 'traded', series: '2013', facility: 'FW', notes: 'Star note; traded at the club for a 1995 web note.' },
       },
       {
         strap: 3,
@@ -138,8 +146,16 @@ export const DEMO_HUNTS: DemoHunt[] = [
       {
         strap: 2,
         at: 88,
-        serial: 'PL46464646A',
-        keeper: { grade: 63, estimatedValueCents: 12500, status: 'kept', series: '2021', facility: 'FW', notes: 'Super repeater: the find of the year.' },
+        serial: 'L46464646A',
+        keeper: {
+          grade: 65,
+          estimatedValueCents: 12500,
+          status: 'kept',
+          series: '2021',
+          facility: 'FW',
+          originalPaper: true,
+          notes: 'Super repeater: the find of the year.',
+        },
       },
       { strap: 5, at: 3, serial: '00000417', keeper: { grade: 45, estimatedValueCents: 9000, status: 'kept', series: '2021', notes: 'Low serial, three digits.' } },
       { strap: 7, at: 50, serial: '61600919' },
@@ -160,7 +176,7 @@ export const DEMO_HUNTS: DemoHunt[] = [
     seed: 55,
     finds: [
       { strap: 1, at: 70, serial: '82288228', keeper: { grade: 20, estimatedValueCents: 800, status: 'kept', series: '2017A', notes: 'Radar and repeater at once; worn.' } },
-      { strap: 3, at: 30, serial: 'KF40177104B' },
+      { strap: 3, at: 30, serial: 'F40177104B' },
     ],
     // Strap 3's swap is not recorded yet, so the sheet shows it one short.
     straps: [],
@@ -193,12 +209,21 @@ export const DEMO_TYPED_KEEPERS = [
   },
 ];
 
-/** A circulated note's serial with a prefix now and then, as a hunter might type it. */
-export function circulatedSerial(random: () => number): string {
-  const digits = String(1 + Math.floor(random() * 99_999_998)).padStart(8, '0');
+/**
+ * A circulated note's serial with a prefix now and then, as a hunter might type it, in the form its face
+ * value carries (TRADE.md): $1 and $2 one prefix letter, the district; a redesigned $5 the series letter
+ * (M 2013, N 2017, P 2017A) and then the district. Circulating notes stop at 96,000,000 in a block.
+ */
+export function circulatedSerial(random: () => number, denomination: number): string {
+  const digits = String(1 + Math.floor(random() * 95_999_999)).padStart(8, '0');
   if (random() > 0.3) return digits;
-  const series = 'JKLMP'[Math.floor(random() * 5)]!;
+  const series = 'MNP'[Math.floor(random() * 3)]!;
   const district = 'ABCDEFGHIJKL'[Math.floor(random() * 12)]!;
   const suffix = 'ABCDEFGHJKLMN'[Math.floor(random() * 13)]!;
-  return `${series}${district}${digits}${suffix}`;
+  return `${denomination <= 2 ? '' : series}${district}${digits}${suffix}`;
+}
+
+/** The serial of a new note in sequence: the vault's run, in its face value's form. */
+export function sequentialSerial(denomination: number, value: number): string {
+  return `${denomination <= 2 ? '' : 'M'}G${String(value).padStart(8, '0')}A`;
 }

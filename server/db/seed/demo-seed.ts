@@ -10,7 +10,7 @@ import { storedReading } from '../../features/scans/scan-reading';
 import { UserEntity, type UserRole } from '../../features/users/user.entity';
 import { createServices } from '../../services';
 import { DEMO_ADMIN, DEMO_COLLECTOR, DEMO_CREW } from './demo-accounts';
-import { DEMO_HUNTS, DEMO_TYPED_KEEPERS, circulatedSerial, demoId, prng, type DemoHunt } from './demo-data';
+import { DEMO_HUNTS, DEMO_TYPED_KEEPERS, circulatedSerial, demoId, prng, sequentialSerial, type DemoHunt } from './demo-data';
 
 async function ensureUser(dataSource: DataSource, account: { email: string; password: string; displayName: string }, role: UserRole): Promise<{ user: UserEntity; created: boolean }> {
   const users = dataSource.getRepository(UserEntity);
@@ -56,8 +56,8 @@ function planScans(hunt: DemoHunt): PlannedScan[] {
       const serial = find
         ? find.serial
         : hunt.sequentialFrom !== undefined
-          ? `LG${String(hunt.sequentialFrom + index).padStart(8, '0')}A`
-          : circulatedSerial(random);
+          ? sequentialSerial(hunt.denomination, hunt.sequentialFrom + index)
+          : circulatedSerial(random, hunt.denomination);
       planned.push({
         scan: {
           id: demoId(`${hunt.key}:scan:${index}`),
@@ -118,9 +118,9 @@ export async function seedDemo(dataSource: DataSource): Promise<{ created: strin
     const plan = planScans(hunt);
     const lastScan = plan[plan.length - 1]!.scan.scannedAt;
     const inserted: unknown[] = await dataSource.query(
-      `INSERT INTO hunts (id, owner_id, title, source, denomination, planned_straps, status, started_at)
-       VALUES ($1, $2, $3, $4, $5, $6, 'open', $7) ON CONFLICT (id) DO NOTHING RETURNING id`,
-      [huntId, me, hunt.title, hunt.source, hunt.denomination, hunt.plannedStraps, hunt.startedAt],
+      `INSERT INTO hunts (id, owner_id, title, source, denomination, planned_straps, in_sequence, status, started_at)
+       VALUES ($1, $2, $3, $4, $5, $6, $7, 'open', $8) ON CONFLICT (id) DO NOTHING RETURNING id`,
+      [huntId, me, hunt.title, hunt.source, hunt.denomination, hunt.plannedStraps, hunt.sequentialFrom !== undefined, hunt.startedAt],
     );
     if (inserted.length) created.push(`hunt "${hunt.title}"`);
     await dataSource.query(`INSERT INTO hunt_members (hunt_id, user_id, role, joined_at) VALUES ($1, $2, 'owner', $3) ON CONFLICT DO NOTHING`, [

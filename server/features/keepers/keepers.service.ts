@@ -20,7 +20,7 @@ import type { ReadingContext, WeightsService } from '../weights/weights.service'
 import { KeeperEntity } from './keeper.entity';
 
 /** What a keeper's reading depends on besides the owner's weights and watch patterns. */
-type NoteFacts = Pick<KeeperEntity, 'serial' | 'star' | 'series' | 'district' | 'facility' | 'denomination'>;
+type NoteFacts = Pick<KeeperEntity, 'serial' | 'star' | 'series' | 'district' | 'facility' | 'denomination' | 'starRunSize'>;
 
 function readNote(facts: NoteFacts, context: ReadingContext): Reading | null {
   const reading = read(facts.serial, {
@@ -31,6 +31,7 @@ function readNote(facts: NoteFacts, context: ReadingContext): Reading | null {
     district: facts.district ?? undefined,
     facility: facts.facility ?? undefined,
     denomination: facts.denomination ?? undefined,
+    starRunSize: facts.starRunSize,
   });
   return reading.ok ? reading : null;
 }
@@ -221,6 +222,7 @@ export class KeepersService {
       district: request.district !== undefined ? request.district : base.district,
       facility: request.facility ?? null,
       denomination: request.denomination !== undefined ? request.denomination : base.denomination,
+      starRunSize: request.starRunSize !== undefined ? request.starRunSize : base.starRunSize,
     };
     const reading = read(facts.serial);
     if (!reading.ok) throw unreadable(reading.error.message);

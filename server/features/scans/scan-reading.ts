@@ -23,7 +23,11 @@ export type StoredReadingResult = { ok: true; reading: StoredReading } | { ok: f
  * notes a stored scan never shows. That is most of `read()`'s cost, and a batch reads 1,000 serials.
  * test/server/scan-reading.test.ts holds every field against `read()` over thousands of serials.
  */
-export function storedReading(serial: string, context: ReadingContext, facts: { star?: boolean }): StoredReadingResult {
+export function storedReading(
+  serial: string,
+  context: ReadingContext,
+  facts: { star?: boolean; starRunSize?: number | null },
+): StoredReadingResult {
   const parsed = parseSerial(serial);
   if (!parsed.ok) return { ok: false, message: parsed.error.message };
   const lowLimit = isLowLimit(context.weights.lowLimit) ? context.weights.lowLimit : DEFAULT_LOW_LIMIT;
@@ -31,7 +35,10 @@ export function storedReading(serial: string, context: ReadingContext, facts: { 
   const { longestRun, maxDigitCount } = features(parsed.value);
   const star = parsed.star || facts.star === true;
   const watch = context.watch.map((pattern) => matchWatch(parsed.value, pattern));
-  const scored = score({ value: parsed.value, patterns, longestRun, maxDigitCount, star, watch }, { ...context.weights, lowLimit });
+  const scored = score(
+    { value: parsed.value, patterns, longestRun, maxDigitCount, star, watch, starRunSize: facts.starRunSize },
+    { ...context.weights, lowLimit },
+  );
   return {
     ok: true,
     reading: {

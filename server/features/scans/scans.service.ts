@@ -88,7 +88,7 @@ export class ScansService {
         rejected.push({ id, code: 'hunt-closed', error: 'The hunt was closed before this note was logged' });
         continue;
       }
-      const result = storedReading(input.serial, context, { star: input.star });
+      const result = storedReading(input.serial, context, { star: input.star, starRunSize: input.starRunSize });
       if (!result.ok) {
         rejected.push({ id, code: 'unreadable-serial', error: result.message });
         continue;

@@ -63,7 +63,7 @@ export class ShareService {
     const keeper = await this.liveKeeper(token);
     const reading = read(keeper.serial, { star: keeper.star });
     const odds = reading.ok ? reading.odds.patterns : [];
-    const photos = await this.dataSource.getRepository(PhotoEntity).find({ where: { keeperId: keeper.id }, order: { side: 'DESC' } });
+    const photo = await this.sharedPhoto(keeper.id);
     const base = `/api/share/${token}/photos`;
     return {
       serial: keeper.serial,
@@ -77,21 +77,24 @@ export class ShareService {
       denomination: keeper.denomination,
       grade: keeper.grade,
       patterns: odds.map(({ id, oneIn }) => ({ id, name: PATTERN_NAMES[id], oneIn: Number.isFinite(oneIn) ? oneIn : null })),
-      photos: photos.map((photo) => ({
-        id: photo.id,
-        side: photo.side,
-        url: `${base}/${photo.id}`,
-        thumbUrl: `${base}/${photo.id}/thumb`,
-        width: photo.width,
-        height: photo.height,
-      })),
+      // One side only, and only its small copy: TRADE.md's caution on reproductions of currency.
+      photos: photo
+        ? [{ id: photo.id, side: photo.side, url: `${base}/${photo.id}/thumb`, thumbUrl: `${base}/${photo.id}/thumb`, width: photo.width, height: photo.height }]
+        : [],
     };
   }
 
-  async photo(token: string, photoId: string, thumb: boolean): Promise<PhotoBytes> {
+  /** The one photo a share link shows: the front when there is one, else the back. */
+  private async sharedPhoto(keeperId: string): Promise<PhotoEntity | null> {
+    const photos = await this.dataSource.getRepository(PhotoEntity).find({ where: { keeperId }, order: { side: 'DESC' } });
+    return photos.find((p) => p.side === 'front') ?? photos[0] ?? null;
+  }
+
+  /** Only the shared side, and only small, whichever address is asked for: the full-size photo stays the owner's. */
+  async photo(token: string, photoId: string, _thumb: boolean): Promise<PhotoBytes> {
     const keeper = await this.liveKeeper(token);
-    const photo = await this.dataSource.getRepository(PhotoEntity).findOne({ where: { id: photoId, keeperId: keeper.id } });
-    if (!photo) throw notFound('No such photo');
-    return this.photos.read(photo, thumb);
+    const photo = await this.sharedPhoto(keeper.id);
+    if (!photo || photo.id !== photoId) throw notFound('No such photo');
+    return this.photos.read(photo, true);
   }
 }

@@ -1,6 +1,7 @@
 import type { DataSource } from 'typeorm';
-import { expectedHits } from '../../../shared/engine';
-import type { LowLimit, PatternId } from '../../../shared/engine';
+import { combinedHits } from '../../../shared/engine';
+import type { LowLimit, PatternId, TallyPart } from '../../../shared/engine';
+import { runEndFor } from '../../../shared/trade';
 import type { HuntTally, PeriodTally, TallyQuery } from '../../../shared/contracts/tally';
 import { HttpError } from '../../lib/errors';
 import { NON_LOW_MASK, PATTERN_BIT, PATTERN_IDS, PATTERN_NAMES, int } from '../../lib/patterns';
@@ -30,10 +31,22 @@ function figureColumns(lowParam: string): string {
 
 const perThousand = (hits: number, notes: number): number => (notes > 0 ? (hits * 1000) / notes : 0);
 
-function figures(row: Record<string, unknown> | undefined, lowLimit: LowLimit): Figures {
+/** A hunt's notes as one tally part: in sequence (one run up to its denomination's run end) or circulated. */
+function partOf(row: Record<string, unknown>): TallyPart {
+  return { notes: int(row.notes), inSequence: row.in_sequence === true, domainLast: runEndFor(int(row.denomination))?.last };
+}
+
+function basisOf(parts: readonly TallyPart[]): Figures['basis'] {
+  const inSequence = parts.some((part) => part.inSequence && part.notes > 0);
+  const circulated = parts.some((part) => !part.inSequence && part.notes > 0);
+  return inSequence ? (circulated ? 'mixed' : 'sequence') : 'poisson';
+}
+
+function figures(row: Record<string, unknown> | undefined, lowLimit: LowLimit, parts: readonly TallyPart[]): Figures {
   const notes = int(row?.notes);
   const actual = Object.fromEntries(PATTERN_IDS.map((id) => [id, int(row?.[id])])) as Record<PatternId, number>;
-  const expected = expectedHits(notes, actual, { lowLimit });
+  // Sequential hunts are compared with the exact run distribution, circulated notes with Poisson (TRADE.md).
+  const expected = combinedHits(parts, actual, { lowLimit });
   const hits = int(row?.hits);
   return {
     notes,
@@ -50,7 +63,10 @@ function figures(row: Record<string, unknown> | undefined, lowLimit: LowLimit): 
       probability: r.probability,
       expected: r.expected,
       pAtLeast: r.pAtLeast ?? 1,
+      pAtMost: r.pAtMost ?? 1,
+      verdict: r.verdict ?? 'no-comparison',
     })),
+    basis: basisOf(parts),
     caveat: expected.caveat,
   };
 }
@@ -75,11 +91,12 @@ export class TallyService {
 
   async hunt(userId: string, huntId: string): Promise<HuntTally> {
     const [, weights] = await Promise.all([huntAccess(this.dataSource, huntId, userId), this.weights.activeWeights(userId)]);
-    const rows: Array<Record<string, unknown>> = await this.dataSource.query(
-      `SELECT ${figureColumns('$2')} FROM scans WHERE hunt_id = $1`,
-      [huntId, weights.lowLimit],
-    );
-    return { huntId, ...figures(rows[0], weights.lowLimit) };
+    const [rows, hunts]: Array<Array<Record<string, unknown>>> = await Promise.all([
+      this.dataSource.query(`SELECT ${figureColumns('$2')} FROM scans WHERE hunt_id = $1`, [huntId, weights.lowLimit]),
+      this.dataSource.query(`SELECT in_sequence, denomination FROM hunts WHERE id = $1`, [huntId]),
+    ]);
+    const part = partOf({ ...hunts[0], notes: rows[0]?.notes });
+    return { huntId, ...figures(rows[0], weights.lowLimit, [part]) };
   }
 
   /** Over every hunt the caller belongs to (crew's notes included), optionally within a period. */
@@ -94,11 +111,11 @@ export class TallyService {
     const [totals, byHunt, overTime] = await Promise.all([
       this.dataSource.query(`SELECT ${figureColumns('$4')} FROM scans s WHERE ${scope}`, params) as Promise<Array<Record<string, unknown>>>,
       this.dataSource.query(
-        `SELECT s.hunt_id, h.title, h.started_at, count(*)::int AS notes,
+        `SELECT s.hunt_id, h.title, h.started_at, h.in_sequence, h.denomination, count(*)::int AS notes,
                 count(*) FILTER (WHERE (s.pattern_mask & ${NON_LOW_MASK}) <> 0 OR s.value <= $4)::int AS hits
            FROM scans s JOIN hunts h ON h.id = s.hunt_id
           WHERE ${scope}
-          GROUP BY s.hunt_id, h.title, h.started_at
+          GROUP BY s.hunt_id, h.title, h.started_at, h.in_sequence, h.denomination
           ORDER BY h.started_at, s.hunt_id`,
         params,
       ) as Promise<Array<Record<string, unknown>>>,
@@ -112,7 +129,7 @@ export class TallyService {
       ) as Promise<Array<Record<string, unknown>>>,
     ]);
     return {
-      ...figures(totals[0], weights.lowLimit),
+      ...figures(totals[0], weights.lowLimit, byHunt.map(partOf)),
       from: from?.toISOString() ?? null,
       to: to?.toISOString() ?? null,
       bucket: query.bucket,

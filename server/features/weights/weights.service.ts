@@ -1,5 +1,5 @@
 import type { DataSource, EntityManager } from 'typeorm';
-import { DEFAULT_WEIGHTS } from '../../../shared/engine';
+import { DEFAULT_WEIGHTS, completeWeights } from '../../../shared/engine';
 import type { WatchPattern, WeightTable } from '../../../shared/engine';
 import type {
   CreateWeightTableRequest,
@@ -30,7 +30,8 @@ function toView(table: WeightTableEntity): WeightTableView {
     id: table.id,
     name: table.name,
     active: table.active,
-    weights: table.weights as WeightTableValues,
+    // A table saved before a pattern existed shows (and scores) with that pattern's default weight.
+    weights: completeWeights(table.weights) as WeightTableValues,
     createdAt: table.createdAt.toISOString(),
     updatedAt: table.updatedAt.toISOString(),
   };
@@ -69,13 +70,13 @@ export class WeightsService {
         Array<{ pattern: WatchPattern }>
       >,
     ]);
-    return { weights: tables[0]?.weights ?? defaultWeights(), watch: watch.map((row) => row.pattern) };
+    return { weights: completeWeights(tables[0]?.weights ?? defaultWeights()), watch: watch.map((row) => row.pattern) };
   }
 
   /** The active table alone, for figures that only need its low limit or threshold. */
   async activeWeights(userId: string): Promise<WeightTable> {
     const rows: Array<{ weights: WeightTable }> = await this.dataSource.query(`SELECT weights FROM weight_tables WHERE user_id = $1 AND active`, [userId]);
-    return rows[0]?.weights ?? defaultWeights();
+    return completeWeights(rows[0]?.weights ?? defaultWeights());
   }
 
   async list(userId: string): Promise<WeightTableList> {

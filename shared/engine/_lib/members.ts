@@ -80,7 +80,32 @@ function build(pattern: NeighbourPatternId): Uint32Array {
       return exactlyDistinct(2);
     case 'trinary':
       return exactlyDistinct(3);
+    case 'super-radar':
+      return superRadars();
+    case 'true-binary':
+      return trueBinaries();
   }
+}
+
+/** a bbbbbb a with a ≠ b, ascending: 90 serials (a = 0 included: 01111110 is a serial). */
+function superRadars(): Uint32Array {
+  const out: number[] = [];
+  for (let a = 0; a <= 9; a++) {
+    for (let b = 0; b <= 9; b++) if (a !== b) out.push(a * 10_000_001 + b * 1_111_110);
+  }
+  return Uint32Array.from(out.sort((x, y) => x - y));
+}
+
+/** Every 8-digit string of 0s and 1s using both, ascending: 2^8 − 2 = 254. */
+function trueBinaries(): Uint32Array {
+  const out = new Uint32Array(254);
+  let n = 0;
+  for (let bits = 1; bits < 255; bits++) {
+    let value = 0;
+    for (let i = 7; i >= 0; i--) value = value * 10 + ((bits >> i) & 1);
+    out[n++] = value;
+  }
+  return out;
 }
 
 export const NEIGHBOUR_PATTERNS: readonly NeighbourPatternId[] = [
@@ -92,6 +117,8 @@ export const NEIGHBOUR_PATTERNS: readonly NeighbourPatternId[] = [
   'rotator',
   'binary',
   'trinary',
+  'super-radar',
+  'true-binary',
 ];
 
 /** The sorted members of a pattern. Shared and cached: callers must not write to it. */

@@ -1,7 +1,12 @@
 import type { PatternId } from '../types';
 
-/** Canonical order of pattern ids; bit i of a pattern mask is PATTERN_ORDER[i]. */
-export const PATTERN_ORDER: readonly PatternId[] = [
+/**
+ * Canonical order of pattern ids; bit i of a pattern mask is PATTERN_ORDER[i].
+ * This is the one list the contracts and the server's stored `pattern_mask`
+ * columns derive from. Stored masks keep their meaning only while existing ids
+ * keep their places: new patterns go at the end, never in between.
+ */
+export const PATTERN_ORDER = [
   'solid',
   'ladder',
   'radar',
@@ -12,7 +17,9 @@ export const PATTERN_ORDER: readonly PatternId[] = [
   'trinary',
   'low',
   'high',
-];
+  'super-radar',
+  'true-binary',
+] as const satisfies readonly PatternId[];
 
 export const BIT = {
   solid: 1 << 0,
@@ -25,9 +32,14 @@ export const BIT = {
   trinary: 1 << 7,
   low: 1 << 8,
   high: 1 << 9,
+  'super-radar': 1 << 10,
+  'true-binary': 1 << 11,
 } as const satisfies Record<PatternId, number>;
 
 export const ALL_BITS = (1 << PATTERN_ORDER.length) - 1;
+
+/** Number of distinct masks: tables indexed by mask have this many entries. */
+export const MASK_COUNT = ALL_BITS + 1;
 
 const ID_SET: ReadonlySet<string> = new Set(PATTERN_ORDER);
 
@@ -35,7 +47,7 @@ export function isPatternId(value: unknown): value is PatternId {
   return typeof value === 'string' && ID_SET.has(value);
 }
 
-// Masks are small (10 bits), so every possible id list is precomputed once and shared;
+// Masks are small (12 bits), so every possible id list is precomputed once and shared;
 // callers get a fresh copy so no one can mutate the cache.
 let idLists: PatternId[][] | null = null;
 

@@ -11,6 +11,10 @@ export interface KeeperDraft {
   star: boolean;
   denomination: number | null;
   grade: string;
+  /** Our own yes/no (never pressed, washed or repaired); '' when not judged. */
+  originalPaper: '' | 'yes' | 'no';
+  /** For a star note: the run size looked up, as typed. */
+  starRunSize: string;
   value: string;
   status: KeeperStatus;
   notes: string;
@@ -24,6 +28,8 @@ export const emptyKeeperDraft: KeeperDraft = {
   star: false,
   denomination: 1,
   grade: '',
+  originalPaper: '',
+  starRunSize: '',
   value: '',
   status: 'kept',
   notes: '',
@@ -38,6 +44,8 @@ export function keeperToDraft(keeper: KeeperSummary): KeeperDraft {
     star: keeper.star,
     denomination: keeper.denomination,
     grade: keeper.grade == null ? '' : String(keeper.grade),
+    originalPaper: keeper.originalPaper == null ? '' : keeper.originalPaper ? 'yes' : 'no',
+    starRunSize: keeper.starRunSize == null ? '' : String(keeper.starRunSize),
     value: centsToInput(keeper.estimatedValueCents),
     status: keeper.status,
     notes: keeper.notes ?? '',
@@ -54,6 +62,8 @@ export function checkKeeperDraft(draft: KeeperDraft): DraftCheck {
   const money = parseDollars(draft.value);
   if (!money.ok) fields.estimatedValueCents = money.error;
   const grade = draft.grade.trim() === '' ? null : Number(draft.grade);
+  const runText = draft.starRunSize.replace(/[\s,._]/g, '');
+  const starRunSize = !draft.star || runText === '' ? null : /^\d+$/.test(runText) ? Number(runText) : Number.NaN;
   const candidate = {
     serial: draft.serial.trim(),
     series: draft.series.trim() || null,
@@ -62,6 +72,8 @@ export function checkKeeperDraft(draft: KeeperDraft): DraftCheck {
     star: draft.star,
     denomination: draft.denomination,
     grade,
+    originalPaper: draft.originalPaper === '' ? null : draft.originalPaper === 'yes',
+    starRunSize,
     estimatedValueCents: money.ok ? money.cents : null,
     status: draft.status,
     notes: draft.notes.trim() || null,

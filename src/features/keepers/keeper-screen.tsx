@@ -1,6 +1,7 @@
 import { useEffect, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { router, useLocalSearchParams } from 'expo-router';
+import { gradeLabel } from '@shared/trade';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Notice } from '@/components/ui/notice';
@@ -112,7 +113,7 @@ export function KeeperScreen() {
   return (
     <Screen
       title={keeperTitle(keeper)}
-      subtitle={`${keeper.points} points · ${keeper.grade ? `grade ${keeper.grade}` : 'ungraded'} · ${formatCents(keeper.estimatedValueCents)} · found ${new Date(keeper.foundAt).toLocaleDateString('en-US')}`}
+      subtitle={`${keeper.points} points · ${keeper.grade ? gradeLabel(keeper.grade) : 'ungraded'}${keeper.originalPaper === true ? ' · original paper' : keeper.originalPaper === false ? ' · not original paper' : ''} · ${formatCents(keeper.estimatedValueCents)} · found ${new Date(keeper.foundAt).toLocaleDateString('en-US')}`}
       actions={<Button compact kind="secondary" label="All keepers" onPress={() => router.push('/keepers')} />}
       maxWidth={1200}
     >

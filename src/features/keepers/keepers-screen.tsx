@@ -30,13 +30,18 @@ const STATUSES: { value: '' | KeeperStatus; label: string }[] = [
   { value: 'sold', label: 'Sold' },
   { value: 'spent', label: 'Spent back' },
 ];
-type GradeBand = '' | 'ungraded' | 'low' | 'mid' | 'unc';
+type GradeBand = '' | 'ungraded' | 'circulated' | 'au' | 'unc' | 'choice' | 'gem' | 'superb';
+const within = (from: number, to: number) => (grade: number | null) => grade != null && grade >= from && grade <= to;
+// The bands a new note from a strap is judged in (TRADE.md): a 65 is Gem, not just "Unc".
 const GRADE_BANDS: { value: GradeBand; label: string; test: (grade: number | null) => boolean }[] = [
   { value: '', label: 'Any', test: () => true },
   { value: 'ungraded', label: 'Ungraded', test: (grade) => grade == null },
-  { value: 'low', label: '1–39', test: (grade) => grade != null && grade < 40 },
-  { value: 'mid', label: '40–59', test: (grade) => grade != null && grade >= 40 && grade < 60 },
-  { value: 'unc', label: 'Unc 60–70', test: (grade) => grade != null && grade >= 60 },
+  { value: 'circulated', label: '1–49', test: within(1, 49) },
+  { value: 'au', label: 'AU 50–59', test: within(50, 59) },
+  { value: 'unc', label: 'Unc 60–62', test: within(60, 62) },
+  { value: 'choice', label: 'Choice 63–64', test: within(63, 64) },
+  { value: 'gem', label: 'Gem 65–66', test: within(65, 66) },
+  { value: 'superb', label: 'Superb Gem 67+', test: within(67, 70) },
 ];
 
 const PATTERN_FILTERS: { value: '' | PatternId | 'star'; label: string }[] = [

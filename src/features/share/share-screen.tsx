@@ -1,7 +1,7 @@
 import { Image, ScrollView, StyleSheet, View } from 'react-native';
 import { useLocalSearchParams } from 'expo-router';
 import type { SharedKeeper } from '@shared/contracts';
-import { districtByLetter, GRADES } from '@shared/trade';
+import { districtByLetter, gradeBand } from '@shared/trade';
 import { Badge } from '@/components/ui/badge';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
@@ -12,10 +12,11 @@ import { fonts, radius, space } from '@/theme/tokens';
 import { oneInText } from '../sift/reading-view';
 import { useSharedKeeper } from './api';
 
+/** "65 (Gem Uncirculated)": the band, so a 65 is not read as a plain Unc. */
 function gradeText(grade: number | null): string {
   if (grade === null) return 'not graded';
-  const label = [...GRADES].reverse().find((g) => g.grade <= grade)?.label.split('-')[0];
-  return label ? `${grade} (${label})` : String(grade);
+  const band = gradeBand(grade);
+  return band ? `${grade} (${band.name})` : String(grade);
 }
 
 function Facts({ keeper }: { keeper: SharedKeeper }) {
@@ -119,8 +120,8 @@ export function ShareScreen() {
         ) : null}
 
         <Text variant="caption" tone="faint" style={styles.footer}>
-          Odds are exact counts over the serials 00000001–99999999. Photos are the owner&apos;s records of their note; many countries restrict
-          pictures of banknotes (in the US, 18 U.S.C. § 504).
+          Odds are exact counts over the serials 00000001–99999999. Photos are the owner&apos;s records of their note, shown here one side and
+          small: many countries restrict pictures of banknotes (in the US, 18 U.S.C. § 504 and 31 CFR Part 411).
         </Text>
       </View>
     </ScrollView>
@@ -147,6 +148,7 @@ const styles = StyleSheet.create({
   photos: { gap: space.lg },
   photosWide: { flex: 1 },
   photo: { gap: space.xs },
-  image: { width: '100%', borderRadius: radius.sm },
+  // Small on purpose (TRADE.md): the thumbnail at no more than its own 320 px.
+  image: { width: '100%', maxWidth: 320, borderRadius: radius.sm },
   footer: { textAlign: 'center' },
 });

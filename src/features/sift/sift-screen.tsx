@@ -20,6 +20,7 @@ import { HuntChooser } from './components/hunt-chooser';
 import { Keypad } from './components/keypad';
 import { ReadingPanel } from './components/reading-panel';
 import { StrapBar } from './components/strap-bar';
+import { StarRunField, parseStarRun } from './components/star-run-field';
 import { SyncBadge } from './components/sync-badge';
 import { Trail } from './components/trail';
 import { markEighthKey, measureReadingPainted } from './paint-timing';
@@ -38,6 +39,8 @@ export function SiftScreen() {
   const [choosing, setChoosing] = useState(false);
   const [entry, dispatch] = useReducer(entryReducer, emptyEntry);
   const [flash, setFlash] = useState<{ tone: 'ok' | 'error' | 'info'; text: string } | null>(null);
+  const [starRunText, setStarRunText] = useState('');
+  const starRunSize = entry.star ? parseStarRun(starRunText) : null;
 
   const [sheetHuntId, setSheetHuntId] = useState<string | null>(null);
   const sheetQuery = useStrapSheet(sheetHuntId);
@@ -56,9 +59,9 @@ export function SiftScreen() {
   const reading = useMemo(
     () =>
       isComplete(entry)
-        ? read(`${entry.prefix}${entry.digits}`, { weights, watch, star: entry.star, denomination: session.hunt?.denomination })
+        ? read(`${entry.prefix}${entry.digits}`, { weights, watch, star: entry.star, denomination: session.hunt?.denomination, starRunSize })
         : null,
-    [entry, weights, watch, session.hunt?.denomination],
+    [entry, weights, watch, session.hunt?.denomination, starRunSize],
   );
   useEffect(() => {
     if (reading) measureReadingPainted();
@@ -77,7 +80,16 @@ export function SiftScreen() {
     const id = uuid();
     const now = new Date().toISOString();
     const strap = session.count.strap;
-    await queue.add({ id, huntId: session.hunt.id, strap, serial: `${entry.prefix}${entry.digits}`, star: reading.star, pulled: entry.pulled, scannedAt: now });
+    await queue.add({
+      id,
+      huntId: session.hunt.id,
+      strap,
+      serial: `${entry.prefix}${entry.digits}`,
+      star: reading.star,
+      pulled: entry.pulled,
+      scannedAt: now,
+      ...(reading.star && starRunSize !== null ? { starRunSize } : {}),
+    });
     const completed = await session.log({
       id,
       strap,
@@ -91,8 +103,9 @@ export function SiftScreen() {
       loggedAt: now,
     });
     dispatch({ type: 'clear' });
+    setStarRunText('');
     setFlash(completed ? { tone: 'ok', text: `Strap ${completed} done: 100 notes searched. Band it; strap ${completed + 1} is next.` } : null);
-  }, [reading, queue, session, entry]);
+  }, [reading, queue, session, entry, starRunSize]);
 
   const undoLast = useCallback(async () => {
     if (!queue) return;
@@ -197,6 +210,7 @@ export function SiftScreen() {
           {district ? `District ${district.letter} · ${district.number} · ${district.bank}` : 'Letters before the digits: the last one is the district.'}
         </Text>
       </View>
+      {entry.star ? <StarRunField value={starRunText} onChange={setStarRunText} /> : null}
     </View>
   );
 

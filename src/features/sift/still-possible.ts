@@ -43,6 +43,9 @@ export function stillPossible(prefix: string, lowLimit = 999): PatternId[] {
       return smallest <= limit;
     },
     high: () => Number(prefix.padEnd(8, '9')) >= 99_990_000,
+    // d1 bbbbbb d1 with d1 ≠ b: the inner digits typed so far agree, and the 8th (if typed) mirrors the 1st.
+    'super-radar': () => new Set(d.slice(1, 7)).size <= 1 && (n < 2 || d[1] !== d[0]),
+    'true-binary': () => d.every((digit) => digit === '0' || digit === '1'),
   };
   return PATTERN_IDS.filter((id) => checks[id]());
 }

@@ -3,7 +3,7 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { DENOMINATIONS } from '@shared/contracts';
 import { sweep, type ParsedSerial, type SweepResult } from '@shared/engine';
-import { NOTES_PER_STRAP } from '@shared/trade';
+import { NOTES_PER_STRAP, runEndFor } from '@shared/trade';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { ChoiceRow } from '@/components/ui/choice-row';
@@ -45,7 +45,11 @@ export function SweepScreen() {
   const [source, setSource] = useState('New notes in sequence');
   const [exportNote, setExportNote] = useState<string | null>(null);
 
-  const runSweep = (request: SweepRequest) => {
+  const [lastRequest, setLastRequest] = useState<SweepRequest | null>(null);
+
+  // Circulating notes of a face value stop at its run end (TRADE.md), so the sweep does too.
+  const runSweep = (request: SweepRequest, face = denomination) => {
+    setLastRequest(request);
     setBusy(true);
     setFailure(null);
     setExportNote(null);
@@ -53,7 +57,8 @@ export function SweepScreen() {
     setTimeout(() => {
       try {
         const started = Date.now();
-        const result = sweep(request.serial.value, request.count, request.patterns, { lowLimit: weights.lowLimit });
+        const last = Math.max(request.serial.value, runEndFor(face)?.last ?? 99_999_999);
+        const result = sweep(request.serial.value, request.count, request.patterns, { lowLimit: weights.lowLimit, last });
         setSwept((previous) => ({ result, serial: request.serial, ms: Date.now() - started, run: (previous?.run ?? 0) + 1 }));
       } catch (error) {
         setFailure(error instanceof Error ? error.message : 'The sweep could not run.');
@@ -82,6 +87,8 @@ export function SweepScreen() {
       source: source.trim(),
       denomination,
       plannedStraps: straps,
+      // A swept run is new notes in sequence: Tally compares it run for run, not as independent draws.
+      inSequence: true,
     });
     await sift.selectHunt({ id: hunt.id, title: hunt.title, denomination: hunt.denomination });
     router.push('/sift');
@@ -141,7 +148,10 @@ export function SweepScreen() {
                     label="Face value"
                     options={DENOMINATIONS.map((value) => ({ value, label: `$${value}` }))}
                     value={denomination}
-                    onChange={(value) => setDenomination(Number(value))}
+                    onChange={(value) => {
+                      setDenomination(Number(value));
+                      if (lastRequest) runSweep(lastRequest, Number(value));
+                    }}
                   />
                 </View>
                 <Button

@@ -1,4 +1,5 @@
-import { poissonTail } from '@shared/engine';
+import type { ChanceVerdict } from '@shared/engine';
+import type { TallyPatternRow } from '@shared/contracts';
 
 /** Whole counts with thousands separators: 4,000. */
 export const formatCount = (value: number): string => Math.round(value).toLocaleString('en-US');
@@ -35,44 +36,41 @@ export function formatChance(p: number): string {
   return `1 in ${formatCount(oneIn)}`;
 }
 
+/** What a tally row carries about chance: the server's tails and verdict (Poisson or the exact run distribution). */
+export type ChanceRow = Pick<TallyPatternRow, 'hits' | 'expected' | 'pAtLeast' | 'pAtMost' | 'verdict'>;
+
 /**
  * The chance by luck alone of a count at least this far from the expected one, in its direction:
  * P(X ≥ hits) above the expected count, P(X ≤ hits) below it. Null when nothing was found and chance
- * expected next to nothing, where a "100%" would only be noise.
+ * made nothing the likely outcome, where a "100%" would only be noise.
  *
  * @example
- * luck(4, 0.4572, 0.0012665) // { p: 0.0012665, direction: 'at least' }
+ * luck({ hits: 4, expected: 0.4572, pAtLeast: 0.0012665, pAtMost: 0.9999, verdict: 'more' }) // { p: 0.0012665, direction: 'at least' }
  */
-export function luck(hits: number, expected: number, pAtLeast: number): { p: number; direction: 'at least' | 'at most' } | null {
-  if (hits >= expected) return hits === 0 ? null : { p: pAtLeast, direction: 'at least' };
-  const atMost = 1 - poissonTail(hits + 1, expected);
-  if (hits === 0 && atMost >= 0.5) return null;
-  return { p: atMost, direction: 'at most' };
+export function luck(row: ChanceRow): { p: number; direction: 'at least' | 'at most' } | null {
+  if (row.hits >= row.expected) return row.hits === 0 ? null : { p: row.pAtLeast, direction: 'at least' };
+  if (row.hits === 0 && row.pAtMost >= 0.5) return null;
+  return { p: row.pAtMost, direction: 'at most' };
 }
 
-export type Verdict = 'lucky' | 'thin' | 'chance';
-
-/** Past this, a count is called out as unusual either way (a two-sided reading of the 5% rule of thumb). */
-const SURPRISE = 0.025;
+export type Verdict = ChanceVerdict;
 
 /**
- * Whether a count stands out from chance: "lucky" when this many or more was unlikely, "thin" when
- * this few or fewer was unlikely (a picked-over bank), otherwise what chance predicts.
+ * Whether a count stands out from chance, as the server judged it at the 95% level: for circulated notes
+ * against Poisson, for new notes in sequence against every run of the same length.
  *
  * @example
- * verdict(5, 0.5, 0.00017) // 'lucky'
+ * verdict({ hits: 5, expected: 0.5, pAtLeast: 0.00017, pAtMost: 1, verdict: 'more' }) // 'more'
  */
-export function verdict(hits: number, expected: number, pAtLeast: number): Verdict {
-  if (hits > 0 && hits > expected && pAtLeast < SURPRISE) return 'lucky';
-  // P(X ≤ hits) = 1 − P(X ≥ hits + 1).
-  if (hits < expected && 1 - poissonTail(hits + 1, expected) < SURPRISE) return 'thin';
-  return 'chance';
+export function verdict(row: ChanceRow): Verdict {
+  return row.verdict;
 }
 
 export const VERDICT_TEXT: Record<Verdict, string> = {
-  lucky: 'more than chance',
-  thin: 'fewer than chance',
-  chance: 'about chance',
+  more: 'more than chance',
+  fewer: 'fewer than chance',
+  'as-chance': 'about chance',
+  'no-comparison': 'no comparison: chance alone often gives this',
 };
 
 /** "Mon, Mar 2, 2026" in the device's time zone. */

@@ -10,6 +10,8 @@ export interface QueuedScan {
   star: boolean;
   pulled: boolean;
   scannedAt: string;
+  /** For a star note: the run size the hunter looked up, when they did. */
+  starRunSize?: number | null;
 }
 
 export interface RejectedScan {

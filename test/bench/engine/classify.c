@@ -6,7 +6,7 @@
  * engine's own half-serial lookup tables, a stricter comparison.
  * Prints one JSON line: elapsed nanoseconds and the tally of pattern masks
  * (bit order = PATTERN_IDS: solid, ladder, radar, repeater, super-repeater,
- * rotator, binary, trinary, low, high), so the bench can check that both
+ * rotator, binary, trinary, low, high, super-radar, true-binary), so the bench can check that both
  * loops agree as well as time them.
  */
 #include <stdio.h>
@@ -15,8 +15,10 @@
 
 enum {
   SOLID = 1, LADDER = 2, RADAR = 4, REPEATER = 8, SUPER_REPEATER = 16,
-  ROTATOR = 32, BINARY = 64, TRINARY = 128, LOW = 256, HIGH = 512
+  ROTATOR = 32, BINARY = 64, TRINARY = 128, LOW = 256, HIGH = 512,
+  SUPER_RADAR = 1024, TRUE_BINARY = 2048
 };
+#define MASKS 4096
 
 static const int TURN[10] = {0, 1, -1, -1, -1, -1, 9, -1, 8, 6};
 
@@ -61,6 +63,12 @@ static unsigned classify(unsigned value, unsigned low_limit) {
   if (rotator) mask |= ROTATOR;
   if (value <= low_limit) mask |= LOW;
   if (value >= 99990000u) mask |= HIGH;
+  /* super radar: d1 = d8 = a, the six inner digits one digit b, a != b */
+  int inner = 1;
+  for (int i = 2; i < 7; i++) if (d[i] != d[1]) inner = 0;
+  if (inner && d[0] == d[7] && d[0] != d[1]) mask |= SUPER_RADAR;
+  /* true binary: only 0s and 1s, both present */
+  if (seen == 3u) mask |= TRUE_BINARY;
   return mask;
 }
 
@@ -79,10 +87,14 @@ static void build_tables(void) {
 
 static unsigned classify_tables(unsigned value, unsigned low_limit) {
   unsigned hi = value / 10000, lo = value - hi * 10000;
-  int distinct = __builtin_popcount(digit_mask[hi] | digit_mask[lo]);
+  unsigned seen = digit_mask[hi] | digit_mask[lo];
+  int distinct = __builtin_popcount(seen);
   unsigned mask = 0;
   if (distinct == 1) mask = SOLID;
-  else if (distinct == 2) mask = BINARY;
+  else if (distinct == 2) {
+    mask = seen == 3u ? BINARY | TRUE_BINARY : BINARY;
+    if (reversed[hi] == lo && (hi % 1000) % 111 == 0) mask |= SUPER_RADAR;
+  }
   else if (distinct == 3) mask = TRINARY;
   else if (distinct == 8 && (value == 12345678u || value == 23456789u || value == 1234567u ||
                               value == 98765432u || value == 87654321u || value == 76543210u)) mask = LADDER;
@@ -107,7 +119,7 @@ int main(int argc, char **argv) {
   unsigned first = (unsigned)strtoul(argv[1], NULL, 10);
   unsigned count = (unsigned)strtoul(argv[2], NULL, 10);
   unsigned low_limit = (unsigned)strtoul(argv[3], NULL, 10);
-  static unsigned long long tally[1024];
+  static unsigned long long tally[MASKS];
   struct timespec start, end;
   clock_gettime(CLOCK_MONOTONIC, &start);
   if (use_tables) {
@@ -118,7 +130,7 @@ int main(int argc, char **argv) {
   clock_gettime(CLOCK_MONOTONIC, &end);
   long long ns = (long long)(end.tv_sec - start.tv_sec) * 1000000000LL + (end.tv_nsec - start.tv_nsec);
   printf("{\"ns\":%lld,\"count\":%u,\"tally\":[", ns, count);
-  for (int m = 0; m < 1024; m++) printf(m ? ",%llu" : "%llu", tally[m]);
+  for (int m = 0; m < MASKS; m++) printf(m ? ",%llu" : "%llu", tally[m]);
   printf("]}\n");
   return 0;
 }

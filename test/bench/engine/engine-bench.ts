@@ -115,7 +115,7 @@ function runC(first: number, count: number, mode: 'plain' | 'tables'): CRun {
 }
 
 function jsTally(first: number, count: number): { ns: number; tally: Float64Array } {
-  const tally = new Float64Array(1024);
+  const tally = new Float64Array(1 << PATTERN_IDS.length);
   const last = first + count;
   const t0 = process.hrtime.bigint();
   for (let v = first; v < last; v++) tally[patternMask(v, 999)]++;
@@ -253,12 +253,12 @@ let censusSeconds = 0;
 {
   gc();
   const t0 = performance.now();
-  const tally = new Float64Array(1024);
+  const tally = new Float64Array(1 << PATTERN_IDS.length);
   for (let v = 1; v <= 99_999_999; v++) tally[patternMask(v, 999)]++;
   censusSeconds = (performance.now() - t0) / 1000;
   const perPattern = PATTERN_IDS.map((id, i) => {
     let n = 0;
-    for (let m = 0; m < 1024; m++) if (m & (1 << i)) n += tally[m]!;
+    for (let m = 0; m < 1 << PATTERN_IDS.length; m++) if (m & (1 << i)) n += tally[m]!;
     return { id, census: n, count: patternCount(id) };
   });
   const patternsAgree = perPattern.every((p) => p.census === p.count);
@@ -266,7 +266,7 @@ let censusSeconds = 0;
   const byKey = new Map(table.map((row) => [row.ids.join('+'), row.count]));
   let combinationsAgree = true;
   let occurring = 0;
-  for (let m = 0; m < 1024; m++) {
+  for (let m = 0; m < 1 << PATTERN_IDS.length; m++) {
     if (tally[m] === 0) continue;
     occurring++;
     const key = PATTERN_IDS.filter((_, i) => m & (1 << i)).join('+');
@@ -282,7 +282,7 @@ let censusSeconds = 0;
   }
   record(
     'census: all 99,999,999 serials through patternMask, tallied',
-    `${fmt(censusSeconds, 2)} s; ${patternsAgree ? 'all 10 pattern counts agree with patternCount' : 'pattern counts DIFFER: ' + JSON.stringify(perPattern.filter((p) => p.census !== p.count))}; ${occurring} combinations ${combinationsAgree ? 'agree with signatureTable' : 'DIFFER'}${cNote}`,
+    `${fmt(censusSeconds, 2)} s; ${patternsAgree ? `all ${PATTERN_IDS.length} pattern counts agree with patternCount` : 'pattern counts DIFFER: ' + JSON.stringify(perPattern.filter((p) => p.census !== p.count))}; ${occurring} combinations ${combinationsAgree ? 'agree with signatureTable' : 'DIFFER'}${cNote}`,
     'agreement',
     patternsAgree && combinationsAgree,
   );

@@ -1,5 +1,5 @@
 import { Pressable, StyleSheet, TextInput, View } from 'react-native';
-import { GRADES } from '@shared/trade';
+import { GRADES, gradeBand } from '@shared/trade';
 import { Text } from '@/components/ui/text';
 import { useTheme } from '@/theme/theme-provider';
 import { fonts, radius, space, touch } from '@/theme/tokens';
@@ -43,8 +43,10 @@ export function GradePicker({ value, onChange, error }: { value: string; onChang
           style={[styles.input, { color: theme.ink, borderColor: error ? theme.danger : theme.line, backgroundColor: theme.surfaceRaised }]}
           testID="grade-input"
         />
-        <Text variant="caption" tone="faint" style={styles.hint}>
-          Any whole number 1–70. Leave empty if ungraded.
+        <Text variant="caption" tone="faint" style={styles.hint} testID="grade-band">
+          {gradeBand(numeric)
+            ? `${gradeBand(numeric)!.name} (${gradeBand(numeric)!.from}–${gradeBand(numeric)!.to})`
+            : 'Any whole number 1–70. Leave empty if ungraded.'}
         </Text>
       </View>
       {error ? (

@@ -1,6 +1,7 @@
 import { Pressable, StyleSheet, View } from 'react-native';
 import { PATTERN_NAMES } from '@shared/engine';
 import type { KeeperSummary } from '@shared/contracts';
+import { gradeLabel } from '@shared/trade';
 import { Badge } from '@/components/ui/badge';
 import { Text } from '@/components/ui/text';
 import { formatCents } from '@/lib/money';
@@ -53,7 +54,7 @@ export function KeeperCard({ keeper, onOpen, asRow }: { keeper: KeeperSummary; o
       </View>
       <View style={asRow ? styles.figuresRow : styles.figures}>
         <Text style={styles.figure}>{keeper.points} pts</Text>
-        <Text style={styles.figure}>{keeper.grade ? `grade ${keeper.grade}` : 'ungraded'}</Text>
+        <Text style={styles.figure}>{keeper.grade ? gradeLabel(keeper.grade) : 'ungraded'}</Text>
         <Text style={styles.figure}>{formatCents(keeper.estimatedValueCents)}</Text>
         <Badge label={STATUS_LABEL[keeper.status]} tone={keeper.status === 'kept' ? 'ok' : 'neutral'} />
       </View>

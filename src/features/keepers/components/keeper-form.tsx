@@ -1,6 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 import { DENOMINATIONS } from '@shared/contracts';
-import { DISTRICTS } from '@shared/trade';
+import { DISTRICTS, SMALL_STAR_RUN } from '@shared/trade';
 import { ChoiceRow } from '@/components/ui/choice-row';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
@@ -14,6 +14,12 @@ const STATUS = [
   { value: 'traded', label: 'Traded' },
   { value: 'sold', label: 'Sold' },
   { value: 'spent', label: 'Spent back' },
+] as const;
+
+const ORIGINAL_PAPER = [
+  { value: '', label: 'Not judged' },
+  { value: 'yes', label: 'Yes' },
+  { value: 'no', label: 'No' },
 ] as const;
 
 const FACILITIES = [
@@ -57,6 +63,18 @@ export function KeeperForm({ draft, onChange, fields }: { draft: KeeperDraft; on
         value={draft.star ? 'yes' : 'no'}
         onChange={(value) => set('star', value === 'yes')}
       />
+      {draft.star ? (
+        <Field
+          label="Star run size"
+          value={draft.starRunSize}
+          onChangeText={(text) => set('starRunSize', text)}
+          inputMode="numeric"
+          placeholder="as looked up, e.g. 640000"
+          hint={`The run size you looked up; runs of ${SMALL_STAR_RUN.toLocaleString('en-US')} or fewer are small. No run data ships with Strapsift.`}
+          error={fields.starRunSize}
+          testID="keeper-star-run"
+        />
+      ) : null}
       <ChoiceRow
         label="Face value"
         options={DENOMINATIONS.map((value) => ({ value, label: `$${value}` }))}
@@ -64,6 +82,13 @@ export function KeeperForm({ draft, onChange, fields }: { draft: KeeperDraft; on
         onChange={(value) => set('denomination', Number(value))}
       />
       <GradePicker value={draft.grade} onChange={(text) => set('grade', text)} error={fields.grade} />
+      <ChoiceRow
+        label="Original paper (never pressed, washed or repaired)"
+        options={ORIGINAL_PAPER}
+        value={draft.originalPaper}
+        onChange={(value) => set('originalPaper', value as KeeperDraft['originalPaper'])}
+        testID="keeper-original-paper"
+      />
       <Field
         label="Your estimate ($)"
         value={draft.value}

@@ -40,7 +40,7 @@ export function ShareCard({ keeperId }: { keeperId: string }) {
         SHARE LINK
       </Text>
       <Text tone="muted">
-        A page for another collector with this note&apos;s serial, patterns, grade and photos — never your name, values, notes or other keepers.
+        A page for another collector with this note&apos;s serial, patterns, grade and one photo, small (the front if there is one) — never your name, values, notes or other keepers.
       </Text>
       {making.message ? <Notice tone="error">{making.message}</Notice> : null}
       {fresh && active ? (

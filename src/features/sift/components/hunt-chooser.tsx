@@ -27,6 +27,11 @@ const STRAP_CHOICES = [
   { value: 40, label: 'Brick · 40' },
 ] as const;
 
+const NOTE_ORDER_CHOICES = [
+  { value: 'circulated', label: 'Circulated, in no order' },
+  { value: 'sequence', label: 'New, in sequence' },
+] as const;
+
 /** Continue an open hunt, or start today's in one tap with the source remembered from last time. */
 export function HuntChooser({ onChosen, onCancel }: { onChosen(hunt: HuntSummary): void; onCancel?: () => void }) {
   const theme = useTheme();
@@ -35,6 +40,7 @@ export function HuntChooser({ onChosen, onCancel }: { onChosen(hunt: HuntSummary
   const [source, setSource] = useState('');
   const [denomination, setDenomination] = useState<number>(1);
   const [plannedStraps, setPlannedStraps] = useState<number>(10);
+  const [inSequence, setInSequence] = useState<'circulated' | 'sequence'>('circulated');
 
   useEffect(() => {
     void kv.get<string>(LAST_SOURCE).then((saved) => saved && setSource(saved));
@@ -42,7 +48,13 @@ export function HuntChooser({ onChosen, onCancel }: { onChosen(hunt: HuntSummary
   }, []);
 
   const { submit, busy, message, fields } = useSubmit(async () => {
-    const hunt = await createHunt({ title: title.trim() || defaultHuntTitle(), source: source.trim(), denomination, plannedStraps });
+    const hunt = await createHunt({
+      title: title.trim() || defaultHuntTitle(),
+      source: source.trim(),
+      denomination,
+      plannedStraps,
+      inSequence: inSequence === 'sequence',
+    });
     await kv.set(LAST_SOURCE, source.trim());
     await kv.set(LAST_DENOMINATION, denomination);
     onChosen(hunt);
@@ -93,6 +105,16 @@ export function HuntChooser({ onChosen, onCancel }: { onChosen(hunt: HuntSummary
           onChange={(value) => setDenomination(Number(value))}
         />
         <ChoiceRow label="Planned straps" options={STRAP_CHOICES} value={plannedStraps} onChange={(value) => setPlannedStraps(Number(value))} />
+        <ChoiceRow
+          label="The notes are"
+          options={NOTE_ORDER_CHOICES}
+          value={inSequence}
+          onChange={(value) => setInSequence(value === 'sequence' ? 'sequence' : 'circulated')}
+          testID="hunt-in-sequence"
+        />
+        <Text variant="caption" tone="faint">
+          New notes in sequence are compared with every run of the same length; circulated notes as independent draws.
+        </Text>
         {fields.plannedStraps ? <Text tone="danger">Planned straps {fields.plannedStraps}</Text> : null}
         <View style={styles.actions}>
           <Button label="Start hunt" busy={busy} onPress={() => void submit()} testID="start-hunt" style={styles.grow} />

@@ -60,13 +60,16 @@ export function ReadingPanel({ digits, reading, weights, compact }: ReadingPanel
     reading.count && reading.count.times >= 5 ? `${reading.count.times} × ${reading.count.digit}` : null,
   ].filter((text): text is string => !!text);
   const matchedWatch = reading.watch.filter((watch) => watch.matched);
+  // A phone keeps its reading short, but a warning or a check (a run end passed, a duplicated star) always shows.
+  const checkRun = reading.trade.some((note) => note.id === 'star-run' && note.severity === 'check');
+  const tradeShown = compact ? reading.trade.filter((note) => note.severity !== 'info') : reading.trade;
 
   return (
     <View style={styles.panel} testID="reading-panel" accessibilityLiveRegion="polite">
       <View style={styles.scoreRow}>
         <View
           style={[styles.score, { backgroundColor: reading.score.keep ? theme.hit : theme.surfaceSunken, borderColor: reading.score.keep ? theme.hit : theme.line }]}
-          accessibilityLabel={`${reading.score.points} points, ${reading.score.keep ? 'keep it' : 'back in the strap'}`}
+          accessibilityLabel={`${reading.score.points} points, ${reading.score.keep ? 'keep it' : checkRun ? 'look up its star run before it goes back' : 'back in the strap'}`}
           testID="reading-score"
         >
           <Text style={[styles.scoreNumber, { color: reading.score.keep ? theme.onHit : theme.ink }]}>{formatPoints(reading.score.points)}</Text>
@@ -124,10 +127,11 @@ export function ReadingPanel({ digits, reading, weights, compact }: ReadingPanel
         </View>
       ) : null}
 
-      {!compact && reading.trade.length ? (
-        <View style={[styles.section, styles.trade, { borderColor: theme.line }]}>
-          {reading.trade.map((note) => (
-            <Text key={note.id} variant="caption" tone="muted">
+      {tradeShown.length ? (
+        <View style={[styles.section, styles.trade, { borderColor: theme.line }]} testID="reading-trade">
+          {tradeShown.map((note, i) => (
+            <Text key={`${note.id}-${i}`} variant="caption" tone={note.severity === 'warning' ? 'warn' : 'muted'}>
+              {note.severity === 'info' ? '' : note.severity === 'warning' ? 'Warning: ' : 'Check: '}
               {note.text}
             </Text>
           ))}

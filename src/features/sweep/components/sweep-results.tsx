@@ -82,7 +82,11 @@ export function SweepResults({ result, serial, wide }: SweepResultsProps) {
         {sweepHeadline(result)}
       </Text>
       {result.truncated ? (
-        <Text tone="warn">The run reaches 99999999, the last serial, so the sweep stops there.</Text>
+        <Text tone="warn">
+          {result.last === 99_999_999
+            ? 'The run reaches 99999999, the last serial, so the sweep stops there.'
+            : `The run passes ${String(result.last).padStart(8, '0')}, where circulating notes of this face value stop (uncut sheets only above it), so the sweep stops there.`}
+        </Text>
       ) : null}
       {tally.length ? (
         <View style={styles.tally} accessibilityLabel={`By pattern: ${tally.map((row) => `${PATTERN_NAMES[row.id]} ${row.hits}`).join(', ')}`}>

@@ -10,19 +10,36 @@ import { formatChance, formatCount, formatExpected, formatRate, luck, verdict, V
 export interface ChanceFigures {
   notes: number;
   patterns: readonly TallyPatternRow[];
+  /** `sequence`: new notes in sequence, against every run of that length; `poisson`: circulated; `mixed`: both. */
+  basis?: 'poisson' | 'sequence' | 'mixed';
   caveat: string;
 }
 
+const BASIS_TEXT = {
+  poisson:
+    'Chance by luck: the Poisson probability, with the expected count as its mean, of finding at least this many (or, below the expected count, at most this many) by luck alone.',
+  sequence:
+    'Chance by luck: the share of all runs of this many notes in sequence, from every possible starting serial, holding at least this many (or, below the expected count, at most this many).',
+  mixed:
+    'Chance by luck: hunts in sequence as runs from every possible starting serial, circulated notes as Poisson draws, combined exactly.',
+} as const;
+
+const CAVEAT_TITLE = {
+  poisson: 'Circulated notes: independent draws',
+  sequence: 'New notes in sequence: compared run for run',
+  mixed: 'Notes in sequence and circulated notes together',
+} as const;
+
 /** The chance by luck of a count this far out, and in words whether it stands out. */
 function LuckCell({ row }: { row: TallyPatternRow }) {
-  const v = verdict(row.hits, row.expected, row.pAtLeast);
-  const chance = luck(row.hits, row.expected, row.pAtLeast);
+  const v = verdict(row);
+  const chance = luck(row);
   return (
     <View style={styles.stackRight}>
       <Text variant="mono" style={styles.luck}>
         {chance ? formatChance(chance.p) : '—'}
       </Text>
-      <Text variant="caption" tone={v === 'lucky' ? 'hit' : v === 'thin' ? 'warn' : 'faint'} style={styles.rightText}>
+      <Text variant="caption" tone={v === 'more' ? 'hit' : v === 'fewer' ? 'warn' : 'faint'} style={styles.rightText}>
         {chance ? `${chance.direction} ${formatCount(row.hits)}: ` : ''}
         {VERDICT_TEXT[v]}
       </Text>
@@ -32,8 +49,8 @@ function LuckCell({ row }: { row: TallyPatternRow }) {
 
 /** The sentence a screen reader hears for the chart: which patterns stand out, or that none do. */
 export function chanceSummary(figures: ChanceFigures): string {
-  const lucky = figures.patterns.filter((row) => verdict(row.hits, row.expected, row.pAtLeast) === 'lucky').map((row) => row.name);
-  const thin = figures.patterns.filter((row) => verdict(row.hits, row.expected, row.pAtLeast) === 'thin').map((row) => row.name);
+  const lucky = figures.patterns.filter((row) => verdict(row) === 'more').map((row) => row.name);
+  const thin = figures.patterns.filter((row) => verdict(row) === 'fewer').map((row) => row.name);
   const parts = [`Hits found against hits expected by chance in ${formatCount(figures.notes)} notes.`];
   if (lucky.length) parts.push(`More than chance: ${lucky.join(', ')}.`);
   if (thin.length) parts.push(`Fewer than chance: ${thin.join(', ')}.`);
@@ -112,10 +129,9 @@ export function ChanceSection({ figures, wide, testID }: { figures: ChanceFigure
         </View>
       </View>
       <Text variant="caption" tone="faint">
-        Chance by luck: the Poisson probability, with the expected count as its mean, of finding at least this many (or, below the
-        expected count, at most this many) by luck alone.
+        {BASIS_TEXT[figures.basis ?? 'poisson']}
       </Text>
-      <Notice tone="info" title="Sequential notes are not independent draws">
+      <Notice tone="info" title={CAVEAT_TITLE[figures.basis ?? 'poisson']}>
         {figures.caveat}
       </Notice>
     </View>
