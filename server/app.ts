@@ -26,8 +26,9 @@ import { apiNotFound, errorHandler } from './lib/errors';
 import { logger, scrubUrl } from './lib/logger';
 import type { Mailer } from './lib/mail';
 import type { ObjectStore } from './lib/object-store';
-import { resetRateLimits } from './lib/rate-limit';
+import { createLimits, DEFAULT_LIMITS, type LimitRules } from './lib/rate-limit';
 import { webAppRoutes } from './lib/web-app';
+import { config } from './config';
 import { createServices } from './services';
 
 export interface AppOptions {
@@ -40,13 +41,22 @@ export interface AppOptions {
   mailer?: Mailer;
   /** Where photo bytes go; by default S3 from the config (locally the s3rver fake). */
   objectStore?: ObjectStore;
+  /** Addresses of proxies whose X-Forwarded-For is believed (Express `trust proxy`); by default TRUSTED_PROXIES, else none. */
+  trustedProxies?: string[];
+  /** The rate limits; by default DEFAULT_LIMITS. */
+  limits?: LimitRules;
+  /** Prefix of this app's counters in the shared rate_limits table; tests give each app its own. */
+  limitNamespace?: string;
 }
 
 /** Builds the Express app without listening, so tests can drive it in-process with supertest. */
-export function createApp({ dataSource, webDist, resetMailer, mailer, objectStore }: AppOptions): Express {
+export function createApp({ dataSource, webDist, resetMailer, mailer, objectStore, trustedProxies, limits: limitRules, limitNamespace }: AppOptions): Express {
   const app = express();
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
+  // X-Forwarded-For is believed only from the proxies named in the configuration; by default from none,
+  // so a client cannot pick its own address to dodge the per-client limits.
+  const proxies = trustedProxies ?? config().TRUSTED_PROXIES;
+  app.set('trust proxy', proxies.length ? proxies : false);
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -76,14 +86,14 @@ export function createApp({ dataSource, webDist, resetMailer, mailer, objectStor
 
   const api = express.Router();
   api.use(express.json({ limit: '2mb' }));
-  const services = createServices(dataSource, { resetMailer, mailer, objectStore });
+  const limits = createLimits(dataSource, limitRules ?? DEFAULT_LIMITS, limitNamespace);
+  const services = createServices(dataSource, { resetMailer, mailer, objectStore, limits });
+  // Tests wait on background work (reset mails go out after the answer) through this.
+  app.locals.services = services;
   const authed = requireAuth(dataSource);
   api.use(healthRoutes(dataSource));
-  const resetLimits = resetRateLimits();
-  api.post('/auth/forgot', resetLimits.forgot);
-  api.post('/auth/reset', resetLimits.reset);
-  api.use(authRoutes(services.auth, services.passwordReset));
-  api.use(usersRoutes(services.users, authed));
+  api.use(authRoutes(services.auth, services.passwordReset, services.sessions, limits, authed));
+  api.use(usersRoutes(services.users, services.sessions, authed, limits.reset));
   api.use(huntsRoutes(services.hunts, authed));
   api.use(crewRoutes(services.crew, authed));
   api.use(invitesRoutes(services.invites, authed));

@@ -2,7 +2,7 @@ import type { DataSource } from 'typeorm';
 import { INVITE_DAYS, type InviteAccepted, type InviteList, type InvitePreview, type InviteView } from '../../../shared/contracts/invites';
 import { HttpError, conflict, notFound } from '../../lib/errors';
 import { logger } from '../../lib/logger';
-import { renderMail, type Mailer } from '../../lib/mail';
+import { oneLine, renderMail, type Mailer } from '../../lib/mail';
 import { hashSecretToken, newSecretToken } from '../../lib/secret-token';
 import { huntAccess, requireOwner } from './hunt-access';
 import { CrewInviteEntity } from './crew-invite.entity';
@@ -77,7 +77,7 @@ export class InvitesService {
       { small: 'If you do not know the sender, ignore this mail; nothing happens unless you accept.' },
     ]);
     try {
-      await this.mailer.send({ to: email, subject: `${inviter?.display_name ?? 'Someone'} invites you to a Strapsift hunt`, ...body });
+      await this.mailer.send({ to: email, subject: oneLine(`${inviter?.display_name ?? 'Someone'} invites you to a Strapsift hunt`), ...body });
     } catch (error) {
       await this.invites().delete({ id: invite.id });
       logger.error({ err: error, inviteId: invite.id }, 'invitation mail could not be sent');
