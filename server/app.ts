@@ -23,10 +23,11 @@ import { watchRoutes } from './features/watch/watch.routes';
 import { weightsRoutes } from './features/weights/weights.routes';
 import { requireAuth } from './lib/auth-middleware';
 import { apiNotFound, errorHandler } from './lib/errors';
-import { logger, scrubUrl } from './lib/logger';
+import { logger, scrubUrl, serializeError } from './lib/logger';
 import type { Mailer } from './lib/mail';
 import type { ObjectStore } from './lib/object-store';
 import { createLimits, DEFAULT_LIMITS, type LimitRules } from './lib/rate-limit';
+import { rejectControlCharacters } from './lib/text-hygiene';
 import { webAppRoutes } from './lib/web-app';
 import { config } from './config';
 import { createServices } from './services';
@@ -80,12 +81,14 @@ export function createApp({ dataSource, webDist, resetMailer, mailer, objectStor
         // One short line a request: method, scrubbed address and status; headers stay out of the log.
         req: (req: { id?: unknown; method?: string; url?: string }) => ({ id: req.id, method: req.method, url: scrubUrl(req.url ?? '') }),
         res: (res: { statusCode?: number }) => ({ statusCode: res.statusCode }),
+        err: serializeError,
       },
     }),
   );
 
   const api = express.Router();
   api.use(express.json({ limit: '2mb' }));
+  api.use(rejectControlCharacters);
   const limits = createLimits(dataSource, limitRules ?? DEFAULT_LIMITS, limitNamespace);
   const services = createServices(dataSource, { resetMailer, mailer, objectStore, limits });
   // Tests wait on background work (reset mails go out after the answer) through this.
@@ -99,7 +102,7 @@ export function createApp({ dataSource, webDist, resetMailer, mailer, objectStor
   api.use(invitesRoutes(services.invites, authed));
   api.use(huntSummaryRoutes(services.huntSummary, authed));
   api.use(strapsRoutes(services.straps, authed));
-  api.use(scansRoutes(services.scans, authed));
+  api.use(scansRoutes(services.scans, authed, limits));
   api.use(tallyRoutes(services.tally, authed));
   // Photos and share links before the keepers' own routes, which guard all of /keepers themselves.
   api.use(photosRoutes(services.photos, authed));

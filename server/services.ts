@@ -61,7 +61,12 @@ export function createServices(dataSource: DataSource, options: ServiceOptions =
   const invites = new InvitesService(dataSource, mailer, publicUrl);
   const huntSummary = new HuntSummaryService(dataSource, hunts, tally, mailer, publicUrl);
   const exporter = new ExportService(dataSource);
-  const importer = new ImportService(dataSource, scans, keepers);
+  // An EntityManager answers the same query/getRepository calls as a DataSource, so these copies of the
+  // services write inside the import's transaction (one part of an import goes in whole or not at all).
+  const importer = new ImportService(dataSource, (manager) => {
+    const scoped = manager as unknown as DataSource;
+    return { scans: new ScansService(scoped, weights), keepers: new KeepersService(scoped, weights, photos) };
+  });
 
   // Every new account starts with the engine's default weight table, active.
   auth.onRegister((user) => weights.ensureDefault(user.id));
