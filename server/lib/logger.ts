@@ -24,13 +24,17 @@ export const redactedPaths = [
 export function serializeError(error: unknown): Record<string, unknown> {
   if (!(error instanceof Error)) return { message: String(error) };
   const failure = error as Error & { code?: unknown; constraint?: unknown; query?: unknown; driverError?: { code?: unknown; constraint?: unknown } };
+  // PostgreSQL quotes the offending value in some messages ('invalid input syntax for type integer: "…"').
+  const fromDatabase = typeof failure.query === 'string' || failure.driverError !== undefined;
+  const message = fromDatabase ? error.message.replace(/"[^"]*"/g, '"[value]"') : error.message;
   return {
     type: error.name,
-    message: error.message,
+    message,
     code: failure.code ?? failure.driverError?.code,
     constraint: failure.constraint ?? failure.driverError?.constraint,
     query: typeof failure.query === 'string' ? failure.query.slice(0, 500) : undefined,
-    stack: error.stack,
+    // The stack's first line repeats the message.
+    stack: error.stack?.replace(error.message, message),
   };
 }
 
