@@ -57,7 +57,7 @@ describe('production fails closed', () => {
   }, 40_000);
 
   it('when the secret is short or one repeated character, or S3 keeps the stand-in keys, then the configuration is refused', () => {
-    const good = {
+    const good: NodeJS.ProcessEnv = {
       NODE_ENV: 'production',
       JWT_SECRET: 'c2FsdC1hbmQtcGVwcGVyLW9uLXRoZS1zdHJhcC0yMDI2LXJhbmRvbQ',
       DATABASE_URL: 'postgres://app@db.internal:5432/strapsift',
@@ -70,7 +70,7 @@ describe('production fails closed', () => {
     expect(() => loadConfig({ ...good, JWT_SECRET: 'a'.repeat(48) })).toThrow(/JWT_SECRET: looks like a repeated character/);
     expect(() => loadConfig({ ...good, JWT_SECRET: 'short-secret' })).toThrow(/JWT_SECRET/);
     expect(() => loadConfig({ ...good, S3_ACCESS_KEY_ID: 'S3RVER', S3_SECRET_ACCESS_KEY: 'S3RVER' })).toThrow(/S3_ACCESS_KEY_ID[\s\S]*S3_SECRET_ACCESS_KEY/);
-    expect(() => loadConfig({ ...good, NODE_ENV: 'development', JWT_SECRET: undefined, PUBLIC_URL: undefined })).not.toThrow();
+    expect(() => loadConfig({ ...good, NODE_ENV: 'development', JWT_SECRET: undefined, PUBLIC_URL: undefined, JWT_SECRET_FILE: '.data/jwt-secret' })).not.toThrow();
   });
 });
 

@@ -88,7 +88,7 @@ describe('cursors that do not parse', () => {
       [`/api/hunts/${hunt.id}/scans?cursor=${encodeCursor(['2026-13-01T00:00:00Z', uuid])}`, owner],
       [`/api/keepers?sort=newest&cursor=${encodeCursor(['not a time', uuid])}`, owner],
       [`/api/keepers?sort=points&cursor=${encodeCursor(['twelve', uuid])}`, owner],
-      [`/api/admin/users?cursor=${encodeCursor([{ nested: true }])}`, admin],
+      [`/api/admin/users?cursor=${Buffer.from(JSON.stringify([{ nested: true }])).toString('base64url')}`, admin],
     ];
     for (const [path, user] of cases) {
       const response = await request(api.app).get(path).set(user.auth);
