@@ -38,12 +38,13 @@ async function post(url: string, body: unknown, token?: string) {
 }
 
 async function freshDatabase(): Promise<string> {
-  const admin = createDataSource(`postgres://postgres@127.0.0.1:${PGPORT}/postgres`);
+  const adminUrl = process.env.PG_ADMIN_URL ?? `postgres://postgres@127.0.0.1:${PGPORT}/postgres`;
+  const admin = createDataSource(adminUrl);
   await admin.initialize();
   await admin.query(`DROP DATABASE IF EXISTS ${DB} WITH (FORCE)`);
   await admin.query(`CREATE DATABASE ${DB}`);
   await admin.destroy();
-  const url = `postgres://postgres@127.0.0.1:${PGPORT}/${DB}`;
+  const url = adminUrl.replace(/\/[^/]*$/, `/${DB}`);
   const migrator = createDataSource(url);
   await migrator.initialize();
   await migrator.runMigrations();
