@@ -1,5 +1,4 @@
 import { execFile } from 'node:child_process';
-import http from 'node:http';
 import { randomUUID } from 'node:crypto';
 import { Writable } from 'node:stream';
 import { promisify } from 'node:util';
@@ -8,7 +7,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { loadConfig } from '../../server/config';
 import { serializeError } from '../../server/lib/logger';
 import { openTestDataSource, testDatabaseUrl } from '../support/database';
-import { ApiProcess } from '../support/fault-rig';
+import { ApiProcess, healthPid } from '../support/fault-rig';
 import { waitForMail } from '../support/mail';
 
 const run = promisify(execFile);
@@ -25,18 +24,6 @@ async function call(baseUrl: string, method: string, path: string, body?: unknow
   });
   const text = await response.text();
   return { status: response.status, headers: response.headers, body: text ? JSON.parse(text) : null };
-}
-
-/** The pid that answers /api/health on a fresh connection (no keep-alive), so the cluster can hand it to any worker. */
-function healthPid(baseUrl: string): Promise<number | null> {
-  return new Promise((resolve) => {
-    const req = http.get(`${baseUrl}/api/health`, { agent: false }, (res) => {
-      let text = '';
-      res.on('data', (chunk: Buffer) => (text += chunk.toString()));
-      res.on('end', () => resolve(res.statusCode === 200 ? (JSON.parse(text) as { pid: number }).pid : null));
-    });
-    req.on('error', () => resolve(null));
-  });
 }
 
 describe('production fails closed', () => {

@@ -1,4 +1,5 @@
 import { execFileSync, spawn, type ChildProcess } from 'node:child_process';
+import http from 'node:http';
 import { chmodSync, chownSync, existsSync, mkdirSync, readdirSync, rmSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { setTimeout as sleep } from 'node:timers/promises';
@@ -149,6 +150,32 @@ export class ApiProcess {
     await this.stop();
     await this.start();
   }
+}
+
+/** The pid that answers /api/health on a fresh connection (no keep-alive), so a cluster can hand it to any worker. */
+export function healthPid(baseUrl: string): Promise<number | null> {
+  return new Promise((resolve) => {
+    const req = http.get(`${baseUrl}/api/health`, { agent: false, timeout: 2000 }, (res) => {
+      let text = '';
+      res.on('data', (chunk: Buffer) => (text += chunk.toString()));
+      res.on('end', () => resolve(res.statusCode === 200 ? (JSON.parse(text) as { pid: number }).pid : null));
+    });
+    req.on('timeout', () => req.destroy());
+    req.on('error', () => resolve(null));
+  });
+}
+
+/** Kills one worker of a clustered API (SIGKILL, mid-request); the cluster's primary starts another. */
+export async function killOneWorker(baseUrl: string): Promise<number> {
+  for (let attempt = 0; attempt < 100; attempt++) {
+    const pid = await healthPid(baseUrl);
+    if (pid) {
+      process.kill(pid, 'SIGKILL');
+      return pid;
+    }
+    await sleep(100);
+  }
+  throw new Error('no worker answered /api/health');
 }
 
 /** The app's queue transport, over plain fetch from Node, with the same error shapes as the app's client. */
