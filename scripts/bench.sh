@@ -10,6 +10,8 @@ command -v cc >/dev/null || apt_install gcc
 say "engine bench"
 node_modules/.bin/tsx test/bench/engine/engine-bench.ts "$@"
 ensure_postgres
+PG_ADMIN_URL="$(admin_database_url postgres)"
+export PG_ADMIN_URL
 say "API bench"
 node_modules/.bin/tsx test/bench/api/api-bench.ts "$@"
 

@@ -6,4 +6,8 @@ trap stop_postgres_if_started EXIT
 ensure_node_modules
 ensure_postgres
 export PGPORT
+# The load run creates and drops its own database, so it gets the superuser's URL; the app processes
+# it starts connect with that database's URL.
+PG_ADMIN_URL="$(admin_database_url postgres)"
+export PG_ADMIN_URL
 node --import tsx test/load/load.ts "$@"

@@ -35,7 +35,10 @@ say "seeding demo data"
 node_modules/.bin/tsx server/db/seed/run-seed.ts || die "seeding failed"
 ensure_web_export
 
-node --import tsx server/main.ts &
+# WORKERS app processes (default: one per core) under Node's cluster module; see docs/SCALING.md.
+# Each process hashes passwords on libuv's pool; 4 threads a process is plenty on a small machine.
+export UV_THREADPOOL_SIZE="${UV_THREADPOOL_SIZE:-4}"
+node --import tsx server/cluster.ts &
 SERVER_PID=$!
 PIDS+=($SERVER_PID)
 

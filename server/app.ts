@@ -24,11 +24,13 @@ import { watchRoutes } from './features/watch/watch.routes';
 import { weightsRoutes } from './features/weights/weights.routes';
 import { requireAuth } from './lib/auth-middleware';
 import { apiNotFound, errorHandler } from './lib/errors';
-import { logger, scrubUrl } from './lib/logger';
+import { logger, scrubUrl, serializeError } from './lib/logger';
 import type { Mailer } from './lib/mail';
 import type { ObjectStore } from './lib/object-store';
-import { resetRateLimits } from './lib/rate-limit';
+import { createLimits, DEFAULT_LIMITS, type LimitRules } from './lib/rate-limit';
+import { rejectControlCharacters } from './lib/text-hygiene';
 import { webAppRoutes } from './lib/web-app';
+import { config } from './config';
 import { createServices } from './services';
 
 export interface AppOptions {
@@ -41,13 +43,22 @@ export interface AppOptions {
   mailer?: Mailer;
   /** Where photo bytes go; by default S3 from the config (locally the s3rver fake). */
   objectStore?: ObjectStore;
+  /** Addresses of proxies whose X-Forwarded-For is believed (Express `trust proxy`); by default TRUSTED_PROXIES, else none. */
+  trustedProxies?: string[];
+  /** The rate limits; by default DEFAULT_LIMITS. */
+  limits?: LimitRules;
+  /** Prefix of this app's counters in the shared rate_limits table; tests give each app its own. */
+  limitNamespace?: string;
 }
 
 /** Builds the Express app without listening, so tests can drive it in-process with supertest. */
-export function createApp({ dataSource, webDist, resetMailer, mailer, objectStore }: AppOptions): Express {
+export function createApp({ dataSource, webDist, resetMailer, mailer, objectStore, trustedProxies, limits: limitRules, limitNamespace }: AppOptions): Express {
   const app = express();
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
+  // X-Forwarded-For is believed only from the proxies named in the configuration; by default from none,
+  // so a client cannot pick its own address to dodge the per-client limits.
+  const proxies = trustedProxies ?? config().TRUSTED_PROXIES;
+  app.set('trust proxy', proxies.length ? proxies : false);
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -71,26 +82,28 @@ export function createApp({ dataSource, webDist, resetMailer, mailer, objectStor
         // One short line a request: method, scrubbed address and status; headers stay out of the log.
         req: (req: { id?: unknown; method?: string; url?: string }) => ({ id: req.id, method: req.method, url: scrubUrl(req.url ?? '') }),
         res: (res: { statusCode?: number }) => ({ statusCode: res.statusCode }),
+        err: serializeError,
       },
     }),
   );
 
   const api = express.Router();
   api.use(express.json({ limit: '2mb' }));
-  const services = createServices(dataSource, { resetMailer, mailer, objectStore });
+  api.use(rejectControlCharacters);
+  const limits = createLimits(dataSource, limitRules ?? DEFAULT_LIMITS, limitNamespace);
+  const services = createServices(dataSource, { resetMailer, mailer, objectStore, limits });
+  // Tests wait on background work (reset mails go out after the answer) through this.
+  app.locals.services = services;
   const authed = requireAuth(dataSource);
   api.use(healthRoutes(dataSource));
-  const resetLimits = resetRateLimits();
-  api.post('/auth/forgot', resetLimits.forgot);
-  api.post('/auth/reset', resetLimits.reset);
-  api.use(authRoutes(services.auth, services.passwordReset));
-  api.use(usersRoutes(services.users, authed));
+  api.use(authRoutes(services.auth, services.passwordReset, services.sessions, limits, authed));
+  api.use(usersRoutes(services.users, services.sessions, authed, limits.reset));
   api.use(huntsRoutes(services.hunts, authed));
   api.use(crewRoutes(services.crew, authed));
   api.use(invitesRoutes(services.invites, authed));
   api.use(huntSummaryRoutes(services.huntSummary, authed));
   api.use(strapsRoutes(services.straps, authed));
-  api.use(scansRoutes(services.scans, authed));
+  api.use(scansRoutes(services.scans, authed, limits));
   api.use(tallyRoutes(services.tally, authed));
   // Photos and share links before the keepers' own routes, which guard all of /keepers themselves.
   api.use(photosRoutes(services.photos, authed));

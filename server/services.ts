@@ -5,6 +5,7 @@ import { AuthService } from './features/auth/auth.service';
 import { PasswordResetService } from './features/auth/password-reset.service';
 import { SmtpResetMailer } from './features/auth/reset-mail';
 import type { ResetMailer } from './features/auth/reset-mailer';
+import { SessionsService } from './features/auth/sessions.service';
 import { CrewService } from './features/crew/crew.service';
 import { InvitesService } from './features/crew/invites.service';
 import { HuntSummaryService } from './features/hunts/hunt-summary';
@@ -24,6 +25,7 @@ import { WatchService } from './features/watch/watch.service';
 import { WeightsService } from './features/weights/weights.service';
 import { createSmtpMailer, type Mailer } from './lib/mail';
 import { createObjectStore, type ObjectStore } from './lib/object-store';
+import { createLimits, type Limits } from './lib/rate-limit';
 
 export interface ServiceOptions {
   /** Where every mail goes; by default SMTP as configured (locally the mail catcher). */
@@ -32,18 +34,22 @@ export interface ServiceOptions {
   resetMailer?: ResetMailer;
   /** Where photo bytes go; by default S3 as configured (locally the s3rver fake). */
   objectStore?: ObjectStore;
+  /** The shared rate limits (scans a day per user); by default the standard ones. */
+  limits?: Limits;
 }
 
 /** One instance of each service per app, wired here so routes stay thin and tests can build the whole set. */
 export function createServices(dataSource: DataSource, options: ServiceOptions = {}) {
-  const auth = new AuthService(dataSource);
-  const users = new UsersService(dataSource);
+  const sessions = new SessionsService(dataSource);
+  const limits = options.limits ?? createLimits(dataSource);
+  const auth = new AuthService(dataSource, sessions);
   const weights = new WeightsService(dataSource);
   const publicUrl = () => config().PUBLIC_URL;
   const mailer = options.mailer ?? createSmtpMailer(config());
   const objectStore = options.objectStore ?? createObjectStore(config());
   const resetMailer = options.resetMailer ?? new SmtpResetMailer(mailer);
-  const passwordReset = new PasswordResetService(dataSource, auth, resetMailer, publicUrl);
+  const passwordReset = new PasswordResetService(dataSource, auth, resetMailer, publicUrl, sessions);
+  const users = new UsersService(dataSource, sessions, mailer, publicUrl, () => passwordReset);
   const hunts = new HuntsService(dataSource, weights);
   const crew = new CrewService(dataSource);
   const straps = new StrapsService(dataSource);
@@ -57,7 +63,12 @@ export function createServices(dataSource: DataSource, options: ServiceOptions =
   const invites = new InvitesService(dataSource, mailer, publicUrl);
   const huntSummary = new HuntSummaryService(dataSource, hunts, tally, mailer, publicUrl);
   const exporter = new ExportService(dataSource);
-  const importer = new ImportService(dataSource, scans, keepers);
+  // An EntityManager answers the same query/getRepository calls as a DataSource, so these copies of the
+  // services write inside the import's transaction (one part of an import goes in whole or not at all).
+  const importer = new ImportService(dataSource, (manager) => {
+    const scoped = manager as unknown as DataSource;
+    return { scans: new ScansService(scoped, weights), keepers: new KeepersService(scoped, weights, photos) };
+  });
   const archives = { exporter: new ArchiveExportService(dataSource, objectStore), importer: new ArchiveImportService(dataSource, objectStore) };
 
   // Every new account starts with the engine's default weight table, active.
@@ -71,6 +82,8 @@ export function createServices(dataSource: DataSource, options: ServiceOptions =
   keepers.onBeforeRemove((userId, keeperId) => photos.removeForKeeper(userId, keeperId));
 
   return {
+    limits,
+    sessions,
     auth,
     users,
     weights,

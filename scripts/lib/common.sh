@@ -78,12 +78,21 @@ ensure_postgres() {
       local dir="$DATA_DIR"
       while [ "$dir" != "/" ]; do chmod o+x "$dir" 2>/dev/null || true; dir="$(dirname "$dir")"; done
     fi
-    pg_run "$bin/initdb" -D "$PG_DIR" -U postgres --auth=trust -E UTF8 --locale=C.UTF-8 >"$DATA_DIR/initdb.log" 2>&1 \
-      || die "initdb failed; see .data/initdb.log"
+    # Password authentication only (scram-sha-256), never trust: the superuser's password is generated
+    # into .data/ and handed to initdb through a file only the postgres user reads, then removed.
+    local pwfile
+    pwfile="$(mktemp)"
+    cat "$(superuser_password_file)" >"$pwfile"
+    as_root && chown postgres "$pwfile"
+    pg_run "$bin/initdb" -D "$PG_DIR" -U postgres --auth=scram-sha-256 --pwfile="$pwfile" -E UTF8 --locale=C.UTF-8 >"$DATA_DIR/initdb.log" 2>&1 \
+      || { rm -f "$pwfile"; die "initdb failed; see .data/initdb.log"; }
+    rm -f "$pwfile"
   fi
   mkdir -p "$PG_SOCKET_DIR"
   as_root && chown postgres:postgres "$PG_SOCKET_DIR"
   if pg_run "$bin/pg_ctl" -D "$PG_DIR" status >/dev/null 2>&1; then
+    ensure_password_auth
+    ensure_app_role
     return 0
   fi
   touch "$PG_LOG"; as_root && chown postgres:postgres "$PG_LOG"
@@ -92,6 +101,73 @@ ensure_postgres() {
     -o "-p $PGPORT -k $PG_SOCKET_DIR -c listen_addresses=127.0.0.1 -c fsync=on" start >/dev/null \
     || die "PostgreSQL did not start; see .data/pg.log"
   PG_STARTED_HERE=1
+  ensure_password_auth
+  ensure_app_role
+}
+
+# Secrets of the local cluster, generated once into .data/ (git-ignored), readable by this user only.
+superuser_password_file() { generated_secret "$DATA_DIR/pg-superuser-password"; }
+app_password_file() { generated_secret "$DATA_DIR/pg-app-password"; }
+generated_secret() {
+  local file="$1"
+  if [ ! -s "$file" ]; then
+    mkdir -p "$DATA_DIR"
+    (umask 077 && od -An -tx1 -N24 /dev/urandom | tr -d ' \n' >"$file")
+  fi
+  echo "$file"
+}
+
+APP_ROLE=strapsift_app
+
+# A cluster made before passwords (initdb --auth=trust) is moved over: the superuser gets its password
+# while trust still lets us in, then every trust line in pg_hba.conf becomes scram-sha-256 and the
+# server reloads. Idempotent: a cluster without trust lines is left alone.
+ensure_password_auth() {
+  local hba="$PG_DIR/pg_hba.conf"
+  if pg_run grep -Eq '^[[:space:]]*(local|host)[^#]*[[:space:]]trust([[:space:]]|$)' "$hba"; then
+    say "switching the local PostgreSQL from trust to password authentication"
+    PGOPTIONS="-c client_min_messages=warning" "$PG_BIN/psql" -h 127.0.0.1 -p "$PGPORT" -U postgres -d postgres -v ON_ERROR_STOP=1 -qtA \
+      -c "ALTER ROLE postgres PASSWORD '$(cat "$(superuser_password_file)")'" >/dev/null \
+      || die "could not set the PostgreSQL superuser's password"
+    pg_run sed -i -E 's/^([[:space:]]*(local|host)[^#]*[[:space:]])trust([[:space:]]|$)/\1scram-sha-256\3/' "$hba"
+    pg_run "$PG_BIN/pg_ctl" -D "$PG_DIR" reload >/dev/null || die "PostgreSQL did not reload pg_hba.conf"
+    sleep 0.3
+  fi
+}
+
+# The app's own role: it can log in and owns the app's databases, nothing more (not a superuser,
+# cannot create roles or databases). Its password follows .data/pg-app-password.
+ensure_app_role() {
+  local password
+  password="$(cat "$(app_password_file)")"
+  psql_admin -c "DO \$\$ BEGIN
+      IF NOT EXISTS (SELECT 1 FROM pg_roles WHERE rolname = '$APP_ROLE') THEN
+        CREATE ROLE $APP_ROLE LOGIN NOSUPERUSER NOCREATEDB NOCREATEROLE PASSWORD '$password';
+      ELSE
+        ALTER ROLE $APP_ROLE LOGIN NOSUPERUSER NOCREATEDB NOCREATEROLE PASSWORD '$password';
+      END IF;
+    END \$\$" >/dev/null || die "could not create the app's database role"
+}
+
+# Hands a database and everything already in it to the app's role (databases made before the role
+# existed hold tables owned by postgres).
+grant_database() {
+  local name="$1"
+  psql_admin -c "ALTER DATABASE \"$name\" OWNER TO $APP_ROLE" >/dev/null
+  PGPASSWORD="$(cat "$(superuser_password_file)")" PGOPTIONS="-c client_min_messages=warning" \
+    "$PG_BIN/psql" -h 127.0.0.1 -p "$PGPORT" -U postgres -d "$name" -v ON_ERROR_STOP=1 -qtA -c "DO \$\$
+      DECLARE item record;
+      BEGIN
+        EXECUTE 'ALTER SCHEMA public OWNER TO $APP_ROLE';
+        FOR item IN SELECT c.relname, c.relkind FROM pg_class c JOIN pg_namespace n ON n.oid = c.relnamespace
+                     WHERE n.nspname = 'public' AND c.relkind IN ('r', 'S', 'v', 'm', 'p')
+                       AND pg_get_userbyid(c.relowner) <> '$APP_ROLE'
+                       -- a sequence behind a serial column follows its table
+                       AND NOT EXISTS (SELECT 1 FROM pg_depend d WHERE d.objid = c.oid AND d.deptype IN ('a', 'i')) LOOP
+          EXECUTE format('ALTER %s public.%I OWNER TO $APP_ROLE',
+            CASE item.relkind WHEN 'S' THEN 'SEQUENCE' WHEN 'v' THEN 'VIEW' WHEN 'm' THEN 'MATERIALIZED VIEW' ELSE 'TABLE' END, item.relname);
+        END LOOP;
+      END \$\$" >/dev/null || die "could not hand database $name to the app's role"
 }
 
 stop_postgres_if_started() {
@@ -103,7 +179,7 @@ stop_postgres_if_started() {
 }
 
 psql_admin() {
-  PGOPTIONS="-c client_min_messages=warning" \
+  PGPASSWORD="$(cat "$(superuser_password_file)")" PGOPTIONS="-c client_min_messages=warning" \
   "$PG_BIN/psql" -h 127.0.0.1 -p "$PGPORT" -U postgres -d postgres -v ON_ERROR_STOP=1 -qtA "$@"
 }
 
@@ -111,17 +187,21 @@ ensure_database() {
   local name="$1"
   if [ "$(psql_admin -c "SELECT 1 FROM pg_database WHERE datname = '$name'")" != "1" ]; then
     say "creating database $name"
-    psql_admin -c "CREATE DATABASE \"$name\"" >/dev/null
+    psql_admin -c "CREATE DATABASE \"$name\" OWNER $APP_ROLE" >/dev/null
   fi
+  grant_database "$name"
 }
 
 recreate_database() {
   local name="$1"
   psql_admin -c "DROP DATABASE IF EXISTS \"$name\" WITH (FORCE)" >/dev/null
-  psql_admin -c "CREATE DATABASE \"$name\"" >/dev/null
+  psql_admin -c "CREATE DATABASE \"$name\" OWNER $APP_ROLE" >/dev/null
 }
 
-database_url() { echo "postgres://postgres@127.0.0.1:$PGPORT/$1"; }
+# The app connects as its own role with the generated password; the superuser is for these scripts only.
+database_url() { echo "postgres://$APP_ROLE:$(cat "$(app_password_file)")@127.0.0.1:$PGPORT/$1"; }
+# For rigs that create and drop their own databases (load, bench).
+admin_database_url() { echo "postgres://postgres:$(cat "$(superuser_password_file)")@127.0.0.1:$PGPORT/$1"; }
 
 run_migrations() {
   node --import tsx node_modules/typeorm/cli.js migration:run -d server/db/data-source.ts >"$DATA_DIR/migrate.log" 2>&1 \

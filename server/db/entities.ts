@@ -1,3 +1,4 @@
+import { AuthSessionEntity } from '../features/auth/auth-session.entity';
 import { PasswordResetTokenEntity } from '../features/auth/password-reset-token.entity';
 import { CrewInviteEntity } from '../features/crew/crew-invite.entity';
 import { HuntMemberEntity } from '../features/crew/hunt-member.entity';
@@ -8,6 +9,7 @@ import { ScanTombstoneEntity } from '../features/scans/scan-tombstone.entity';
 import { ScanEntity } from '../features/scans/scan.entity';
 import { ShareLinkEntity } from '../features/share/share-link.entity';
 import { StrapEntity } from '../features/straps/strap.entity';
+import { EmailChangeEntity } from '../features/users/email-change.entity';
 import { UserEntity } from '../features/users/user.entity';
 import { WatchPatternEntity } from '../features/watch/watch-pattern.entity';
 import { WeightTableEntity } from '../features/weights/weight-table.entity';
@@ -27,4 +29,6 @@ export const entities = [
   PhotoEntity,
   ShareLinkEntity,
   CrewInviteEntity,
+  AuthSessionEntity,
+  EmailChangeEntity,
 ];

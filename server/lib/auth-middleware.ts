@@ -1,14 +1,16 @@
 import type { NextFunction, Request, RequestHandler, Response } from 'express';
 import type { DataSource } from 'typeorm';
-import { UserEntity, type UserRole } from '../features/users/user.entity';
+import type { UserRole } from '../features/users/user.entity';
 import { forbidden, unauthorized } from './errors';
-import { verifyToken } from './tokens';
+import { verifyAccessToken } from './tokens';
 
 export interface AuthedUser {
   id: string;
   email: string;
   displayName: string;
   role: UserRole;
+  /** The sign-in this request's token belongs to. */
+  sessionId: string;
 }
 
 declare module 'express-serve-static-core' {
@@ -18,27 +20,32 @@ declare module 'express-serve-static-core' {
 }
 
 /**
- * Checks the bearer token and then the user row on every request, so a disabled account or a
- * changed password ends its sessions at once rather than when the token expires.
+ * Checks the bearer token, then the user row and the sign-in it belongs to (one query) on every request,
+ * so a disabled account, a changed password or a sign-out ends its sessions at once, in every process.
  */
 export function requireAuth(dataSource: DataSource): RequestHandler {
-  const users = dataSource.getRepository(UserEntity);
   return (req: Request, _res: Response, next: NextFunction) => {
     const header = req.get('authorization') ?? '';
     const match = /^Bearer\s+(\S+)$/i.exec(header);
-    const claims = match ? verifyToken(match[1], 'access') : null;
+    const claims = match ? verifyAccessToken(match[1]!) : null;
     if (!claims) {
       next(unauthorized(match ? 'Your session has expired; sign in again' : 'Sign in to continue'));
       return;
     }
-    users
-      .findOne({ where: { id: claims.sub } })
-      .then((user) => {
-        if (!user || user.disabled || user.tokenVersion !== claims.ver) {
+    dataSource
+      .query(
+        `SELECT u.id, u.email, u.display_name, u.role, u.disabled, u.token_version
+           FROM users u JOIN auth_sessions s ON s.user_id = u.id
+          WHERE u.id = $1 AND s.id = $2 AND s.ended_at IS NULL AND s.expires_at > now()`,
+        [claims.sub, claims.sid],
+      )
+      .then((rows: Array<{ id: string; email: string; display_name: string; role: UserRole; disabled: boolean; token_version: number }>) => {
+        const user = rows[0];
+        if (!user || user.disabled || user.token_version !== claims.ver) {
           next(unauthorized('Your session has ended; sign in again'));
           return;
         }
-        req.user = { id: user.id, email: user.email, displayName: user.displayName, role: user.role };
+        req.user = { id: user.id, email: user.email, displayName: user.display_name, role: user.role, sessionId: claims.sid };
         next();
       })
       .catch(next);
@@ -55,4 +62,9 @@ export function requireRole(role: UserRole): RequestHandler {
 export function currentUser(req: Request): AuthedUser {
   if (!req.user) throw unauthorized();
   return req.user;
+}
+
+/** The signed-in device's session id; only call behind requireAuth. */
+export function currentSession(req: Request): string {
+  return currentUser(req).sessionId;
 }

@@ -18,8 +18,26 @@ export function decodeCursor<T extends z.ZodTypeAny>(cursor: string | undefined,
     decoded = undefined;
   }
   const parsed = shape.safeParse(decoded);
-  if (!parsed.success) throw new HttpError(400, 'invalid', 'Some fields need attention', { cursor: 'is not a cursor from this list' });
+  if (!parsed.success) throw badCursor();
   return parsed.data;
 }
 
-export const timeIdCursor = z.tuple([z.string().datetime({ offset: true }), z.string().uuid()]);
+export const badCursor = () => new HttpError(400, 'invalid', 'Some fields need attention', { cursor: 'is not a cursor from this list' });
+
+/**
+ * A sort value from a cursor must be of the sort's own kind before it is cast in SQL: a word where a time
+ * is expected would otherwise fail in PostgreSQL as a 500.
+ */
+export function assertCursorKind(value: string | number, kind: 'time' | 'number' | 'text'): void {
+  const fits =
+    kind === 'time' ? typeof value === 'string' && cursorTime.safeParse(value).success : kind === 'number' ? typeof value === 'number' : typeof value === 'string';
+  if (!fits) throw badCursor();
+}
+
+// Years PostgreSQL can take as a timestamptz literal (year 0000 is not one): a forged cursor gets a 400, not a 500.
+const cursorTime = z
+  .string()
+  .datetime({ offset: true })
+  .refine((value) => /^\d{4}-/.test(value) && !value.startsWith('0000') && Number.isFinite(Date.parse(value)), 'is not a time');
+
+export const timeIdCursor = z.tuple([cursorTime, z.string().uuid()]);

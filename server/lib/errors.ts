@@ -11,6 +11,8 @@ export class HttpError extends Error {
     readonly code: string,
     message: string,
     readonly fields?: FieldErrors,
+    /** Seconds a client should wait before trying again; sent as Retry-After with every 429. */
+    readonly retryAfterSeconds?: number,
   ) {
     super(message);
   }
@@ -46,6 +48,7 @@ interface BodyParserError extends Error {
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   const failure = err as BodyParserError;
   if (err instanceof HttpError) {
+    if (err.status === 429) res.setHeader('Retry-After', String(err.retryAfterSeconds ?? 60));
     res.status(err.status).json({ error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) } });
     return;
   }

@@ -24,7 +24,7 @@ export class NodemailerMailer implements Mailer {
   ) {}
 
   async send(message: MailMessage): Promise<void> {
-    await this.transport.sendMail({ from: this.from, to: message.to, subject: message.subject, text: message.text, html: message.html });
+    await this.transport.sendMail({ from: this.from, to: message.to, subject: oneLine(message.subject), text: message.text, html: message.html });
   }
 }
 
@@ -41,6 +41,13 @@ export function createSmtpMailer(settings: Pick<Config, 'SMTP_HOST' | 'SMTP_PORT
   });
   return new NodemailerMailer(transport, settings.MAIL_FROM);
 }
+
+/**
+ * A subject line built from user text (hunt titles, display names): line breaks and other control
+ * characters become spaces, so no one can start a new header or a forged body through a name.
+ */
+// eslint-disable-next-line no-control-regex -- control characters are exactly what this removes
+export const oneLine = (text: string) => text.replace(/[\u0000-\u001f\u007f-\u009f\u2028\u2029]+/g, ' ').trim();
 
 export const escapeHtml = (text: string) =>
   text.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);

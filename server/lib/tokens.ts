@@ -11,37 +11,36 @@ function signingKey(): KeyObject {
 }
 
 export const ACCESS_TOKEN_SECONDS = 15 * 60;
-export const REFRESH_TOKEN_SECONDS = 30 * 24 * 60 * 60;
-
-type TokenKind = 'access' | 'refresh';
 
 interface TokenClaims {
   sub: string;
   /** The user's token version when signed; raising it on the user ends every older token. */
   ver: number;
-  typ: TokenKind;
+  /** The sign-in (row in auth_sessions) this token belongs to; ending it ends the token at once. */
+  sid: string;
 }
 
-function sign(kind: TokenKind, userId: string, tokenVersion: number, seconds: number): string {
-  return jwt.sign({ ver: tokenVersion, typ: kind }, signingKey(), {
+/**
+ * The short-lived bearer token. Refresh tokens are not JWTs: they are opaque secrets whose hash lives in
+ * auth_sessions, so they can rotate and a reused one can be recognised (see sessions.service.ts).
+ */
+export function signAccessToken(userId: string, tokenVersion: number, sessionId: string): string {
+  return jwt.sign({ ver: tokenVersion, typ: 'access', sid: sessionId }, signingKey(), {
     subject: userId,
-    expiresIn: seconds,
+    expiresIn: ACCESS_TOKEN_SECONDS,
     algorithm: 'HS256',
     issuer: 'strapsift',
   });
 }
 
-export const signAccessToken = (userId: string, tokenVersion: number) => sign('access', userId, tokenVersion, ACCESS_TOKEN_SECONDS);
-export const signRefreshToken = (userId: string, tokenVersion: number) => sign('refresh', userId, tokenVersion, REFRESH_TOKEN_SECONDS);
-
-/** Returns the claims of a valid token of the wanted kind, or null for anything expired, forged or malformed. */
-export function verifyToken(token: string, kind: TokenKind): TokenClaims | null {
+/** Returns the claims of a valid access token, or null for anything expired, forged, malformed or of another kind. */
+export function verifyAccessToken(token: string): TokenClaims | null {
   try {
     const claims = jwt.verify(token, signingKey(), { algorithms: ['HS256'], issuer: 'strapsift' });
     if (typeof claims !== 'object' || claims === null) return null;
-    const { sub, ver, typ } = claims as Partial<TokenClaims>;
-    if (typ !== kind || typeof sub !== 'string' || typeof ver !== 'number') return null;
-    return { sub, ver, typ };
+    const { sub, ver, typ, sid } = claims as Partial<TokenClaims> & { typ?: unknown };
+    if (typ !== 'access' || typeof sub !== 'string' || typeof ver !== 'number' || typeof sid !== 'string') return null;
+    return { sub, ver, sid };
   } catch {
     return null;
   }

@@ -8,6 +8,10 @@ export const email = z
   .max(254, 'must be at most 254 characters')
   .email('must be an e-mail address');
 
+/** Shown beside every password field, so the rule is known before the server refuses one. */
+export const PASSWORD_RULE =
+  'At least 10 characters. Not one of the common passwords that leak lists are full of, and not your e-mail or name. A few unrelated words work well.';
+
 export const newPassword = z
   .string()
   .min(10, 'must be at least 10 characters')
@@ -60,8 +64,27 @@ export const updateMeRequest = z
     newPassword: newPassword.optional(),
   })
   .strict()
-  .refine((body) => !body.newPassword || body.currentPassword, {
-    message: 'is required to set a new password',
+  // A stolen session must not be enough to take the account: the e-mail and the password need the password.
+  .refine((body) => (!body.newPassword && !body.email) || body.currentPassword, {
+    message: 'is required to change the e-mail or the password',
     path: ['currentPassword'],
   });
 export type UpdateMeRequest = z.infer<typeof updateMeRequest>;
+
+/** One signed-in device on the You screen. */
+export const deviceSession = z.object({
+  id: uuid,
+  device: z.string(),
+  createdAt: isoDateTime,
+  lastUsedAt: isoDateTime,
+  current: z.boolean(),
+});
+export type DeviceSession = z.infer<typeof deviceSession>;
+export const deviceSessionList = z.object({ items: z.array(deviceSession) });
+export type DeviceSessionList = z.infer<typeof deviceSessionList>;
+
+/** The link mailed to the old address after an e-mail change. */
+export const undoEmailRequest = z.object({ token: z.string().min(10, 'is not a valid link').max(200) });
+/** The address is back; every session ended, and the reset token lets the owner choose a new password at once. */
+export const undoEmailResponse = z.object({ email: z.string(), resetToken: z.string() });
+export type UndoEmailResponse = z.infer<typeof undoEmailResponse>;

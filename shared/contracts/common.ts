@@ -25,7 +25,8 @@ export const cursorQuery = z.object({
   limit: z.coerce.number().int().min(1).max(200).default(50),
 });
 
-export const healthResponse = z.object({ ok: z.boolean(), db: z.enum(['up', 'down']), version: z.string() });
+/** `pid` names the app process that answered, so a check behind a balancer can tell the processes apart. */
+export const healthResponse = z.object({ ok: z.boolean(), db: z.enum(['up', 'down']), version: z.string(), pid: z.number().int() });
 
 /** Face values of the small notes hunters buy in straps, in whole dollars. */
 export const DENOMINATIONS = [1, 2, 5, 10, 20, 50, 100] as const;

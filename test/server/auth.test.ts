@@ -51,6 +51,7 @@ describe('POST /api/auth/forgot', () => {
     const user = await registerUser(api.app, 'forgot');
 
     const response = await request(api.app).post('/api/auth/forgot').send({ email: user.email });
+    await api.settled();
 
     expect(response.status).toBe(202);
     forgotResponse.parse(response.body);
@@ -69,6 +70,7 @@ describe('POST /api/auth/forgot', () => {
     const before = api.outbox.sent.length;
     const known = await request(api.app).post('/api/auth/forgot').send({ email: (await registerUser(api.app, 'forgot-known')).email });
     const unknown = await request(api.app).post('/api/auth/forgot').send({ email: 'nobody-at-all@strapsift.test' });
+    await api.settled();
 
     expect(unknown.status).toBe(202);
     expect(unknown.body).toEqual(known.body);
@@ -86,6 +88,7 @@ describe('POST /api/auth/reset', () => {
   it('when a fresh token is used, then the new password works, the old one and old sessions do not, and the token cannot be used twice', async () => {
     const user = await registerUser(api.app, 'reset');
     await request(api.app).post('/api/auth/forgot').send({ email: user.email }).expect(202);
+    await api.settled();
     const token = api.outbox.latestFor(user.email)!.token;
 
     const reset = await request(api.app).post('/api/auth/reset').send({ token, password: 'a-brand-new-one-2' });
@@ -103,6 +106,7 @@ describe('POST /api/auth/reset', () => {
   it('when two resets race with one token, then exactly one succeeds', async () => {
     const user = await registerUser(api.app, 'reset-race');
     await request(api.app).post('/api/auth/forgot').send({ email: user.email }).expect(202);
+    await api.settled();
     const token = api.outbox.latestFor(user.email)!.token;
 
     const answers = await Promise.all([
@@ -116,6 +120,7 @@ describe('POST /api/auth/reset', () => {
   it('when the token has expired, then 400 and the password is unchanged', async () => {
     const user = await registerUser(api.app, 'reset-expired');
     await request(api.app).post('/api/auth/forgot').send({ email: user.email }).expect(202);
+    await api.settled();
     const token = api.outbox.latestFor(user.email)!.token;
     await api.dataSource.query(`UPDATE password_reset_tokens SET expires_at = now() - interval '1 second' WHERE user_id = $1`, [user.id]);
 

@@ -1,3 +1,4 @@
+import { randomUUID } from 'node:crypto';
 import request from 'supertest';
 import type { Express } from 'express';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -19,7 +20,8 @@ let app: Express;
 
 beforeAll(async () => {
   dataSource = await openTestDataSource();
-  app = createApp({ dataSource });
+  // Its own namespace of limits, and X-Forwarded-For from loopback believed, as openTestApi does.
+  app = createApp({ dataSource, trustedProxies: ['loopback'], limitNamespace: `test-${randomUUID()}` });
 });
 afterAll(async () => {
   await dataSource.destroy();

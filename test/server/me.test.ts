@@ -24,13 +24,16 @@ describe('GET and PATCH /api/me', () => {
     expect(JSON.stringify(me.body)).not.toMatch(/argon2|hash/i);
   });
 
-  it('when the password changes, then the old token stops working and the new password signs in', async () => {
+  it('when the password changes, then every other sign-in ends, this device stays, and the new password signs in', async () => {
     const user = await registerUser(api.app, 'me-password');
+    const elsewhere = authResponse.parse((await request(api.app).post('/api/auth/login').send({ email: user.email, password: user.password })).body);
 
     const changed = await request(api.app).patch('/api/me').set(user.auth).send({ currentPassword: user.password, newPassword: 'changed-password-9' });
 
     expect(changed.status).toBe(200);
-    expect((await request(api.app).get('/api/me').set(user.auth)).status).toBe(401);
+    expect((await request(api.app).get('/api/me').set('Authorization', `Bearer ${elsewhere.token}`)).status).toBe(401);
+    expect((await request(api.app).post('/api/auth/refresh').send({ refreshToken: elsewhere.refreshToken })).status).toBe(401);
+    expect((await request(api.app).get('/api/me').set(user.auth)).status).toBe(200);
     expect((await request(api.app).post('/api/auth/login').send({ email: user.email, password: 'changed-password-9' })).status).toBe(200);
   });
 

@@ -1,8 +1,9 @@
-import { randomUUID } from 'node:crypto';
+import { randomBytes, randomUUID } from 'node:crypto';
 import type { Express } from 'express';
 import request from 'supertest';
 import type { DataSource } from 'typeorm';
-import { createApp } from '../../server/app';
+import { createApp, type AppOptions } from '../../server/app';
+import type { Services } from '../../server/services';
 import { InMemoryResetOutbox } from '../../server/features/auth/reset-mailer';
 import { authResponse, type AuthResponse } from '../../shared/contracts/auth';
 import { huntDetail, type CreateHuntRequest, type HuntDetail } from '../../shared/contracts/hunts';
@@ -13,15 +14,28 @@ export interface TestApi {
   dataSource: DataSource;
   app: Express;
   outbox: InMemoryResetOutbox;
+  /** Waits for work done after an answer (reset mails go out after the 202). */
+  settled(): Promise<void>;
   close(): Promise<void>;
 }
 
-/** One app per test file, on the database the test script migrated, with a readable reset outbox. */
-export async function openTestApi(): Promise<TestApi> {
+/**
+ * One app per test file, on the database the test script migrated, with a readable reset outbox.
+ * The limits are the real ones, but each app counts under its own namespace, and it believes
+ * X-Forwarded-For from loopback so helpers can give each registered test user an address of its own.
+ */
+export async function openTestApi(options: Partial<AppOptions> = {}): Promise<TestApi> {
   const dataSource = await openTestDataSource();
   const outbox = new InMemoryResetOutbox();
-  const app = createApp({ dataSource, resetMailer: outbox });
-  return { dataSource, app, outbox, close: () => dataSource.destroy() };
+  const app = createApp({ dataSource, resetMailer: outbox, trustedProxies: ['loopback'], limitNamespace: `test-${randomUUID()}`, ...options });
+  const services = app.locals.services as Services;
+  return { dataSource, app, outbox, settled: () => services.passwordReset.settled(), close: () => dataSource.destroy() };
+}
+
+/** A made-up client address (TEST-NET-2, RFC 5737), one per call, for X-Forwarded-For. */
+export function clientAddress(): string {
+  const value = randomBytes(2);
+  return `198.51.${value[0]}.${value[1]}`;
 }
 
 export interface TestUser {
@@ -37,7 +51,9 @@ export interface TestUser {
 export async function registerUser(app: Express, label = 'hunter'): Promise<TestUser> {
   const email = `${label}-${randomUUID().slice(0, 8)}@strapsift.test`;
   const password = 'strap-and-sift-1';
-  const response = await request(app).post('/api/auth/register').send({ email, password, displayName: `Test ${label}` });
+  // Each test user registers from an address of its own, so the per-client limit on new accounts holds
+  // as in production without hundreds of test registrations tripping it.
+  const response = await request(app).post('/api/auth/register').set('X-Forwarded-For', clientAddress()).send({ email, password, displayName: `Test ${label}` });
   if (response.status !== 201) throw new Error(`register failed: ${response.status} ${JSON.stringify(response.body)}`);
   const session = authResponse.parse(response.body);
   return { id: session.user.id, email, password, token: session.token, auth: { Authorization: `Bearer ${session.token}` }, session };

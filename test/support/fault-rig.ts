@@ -1,4 +1,5 @@
 import { execFileSync, spawn, type ChildProcess } from 'node:child_process';
+import http from 'node:http';
 import { chmodSync, chownSync, existsSync, mkdirSync, readdirSync, rmSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { setTimeout as sleep } from 'node:timers/promises';
@@ -80,14 +81,24 @@ export class OwnCluster {
   }
 }
 
+export interface ApiProcessOptions {
+  /** server/main.ts (one process) or server/cluster.ts (WORKERS processes on one port). */
+  script?: 'server/main.ts' | 'server/cluster.ts';
+  /** Keep what the process writes (its log) in `output`. */
+  capture?: boolean;
+}
+
 /** The API as its own process (server/main.ts), so it can be killed and started again. */
 export class ApiProcess {
   private child: ChildProcess | null = null;
   readonly baseUrl: string;
+  /** Everything the process wrote, when started with `capture`. */
+  readonly output: string[] = [];
 
   constructor(
     readonly port: number,
     private readonly env: Record<string, string>,
+    private readonly options: ApiProcessOptions = {},
   ) {
     this.baseUrl = `http://127.0.0.1:${port}`;
   }
@@ -96,11 +107,14 @@ export class ApiProcess {
     if (await this.answers()) throw new Error(`port ${this.port} already has a server; the fault test needs it free`);
     // node --import tsx, not the tsx binary: the binary runs the server in a child process, and
     // killing the parent would leave the server answering.
-    this.child = spawn(process.execPath, ['--import', 'tsx', 'server/main.ts'], {
+    this.child = spawn(process.execPath, ['--import', 'tsx', this.options.script ?? 'server/main.ts'], {
       cwd: root,
-      env: { ...process.env, ...this.env, PORT: String(this.port), HOST: '127.0.0.1', LOG_LEVEL: 'silent', WEB_DIST: '.data/no-web' },
-      stdio: 'ignore',
+      env: { ...process.env, LOG_LEVEL: 'silent', ...this.env, PORT: String(this.port), HOST: '127.0.0.1', WEB_DIST: '.data/no-web' },
+      stdio: this.options.capture ? ['ignore', 'pipe', 'pipe'] : 'ignore',
     });
+    const keep = (chunk: Buffer) => this.output.push(chunk.toString('utf8'));
+    this.child.stdout?.on('data', keep);
+    this.child.stderr?.on('data', keep);
     for (let attempt = 0; attempt < 300; attempt++) {
       try {
         const response = await fetch(`${this.baseUrl}/api/health`);
@@ -122,12 +136,12 @@ export class ApiProcess {
     }
   }
 
-  async stop(): Promise<void> {
+  async stop(signal: NodeJS.Signals = 'SIGKILL'): Promise<void> {
     const child = this.child;
     if (!child || child.exitCode !== null) return;
     const exited = new Promise<void>((done) => child.once('exit', () => done()));
-    // SIGKILL, not a polite stop: the point is a process that dies mid-request.
-    child.kill('SIGKILL');
+    // SIGKILL by default, not a polite stop: the point is a process that dies mid-request.
+    child.kill(signal);
     await exited;
     this.child = null;
   }
@@ -136,6 +150,32 @@ export class ApiProcess {
     await this.stop();
     await this.start();
   }
+}
+
+/** The pid that answers /api/health on a fresh connection (no keep-alive), so a cluster can hand it to any worker. */
+export function healthPid(baseUrl: string): Promise<number | null> {
+  return new Promise((resolve) => {
+    const req = http.get(`${baseUrl}/api/health`, { agent: false, timeout: 2000 }, (res) => {
+      let text = '';
+      res.on('data', (chunk: Buffer) => (text += chunk.toString()));
+      res.on('end', () => resolve(res.statusCode === 200 ? (JSON.parse(text) as { pid: number }).pid : null));
+    });
+    req.on('timeout', () => req.destroy());
+    req.on('error', () => resolve(null));
+  });
+}
+
+/** Kills one worker of a clustered API (SIGKILL, mid-request); the cluster's primary starts another. */
+export async function killOneWorker(baseUrl: string): Promise<number> {
+  for (let attempt = 0; attempt < 100; attempt++) {
+    const pid = await healthPid(baseUrl);
+    if (pid) {
+      process.kill(pid, 'SIGKILL');
+      return pid;
+    }
+    await sleep(100);
+  }
+  throw new Error('no worker answered /api/health');
 }
 
 /** The app's queue transport, over plain fetch from Node, with the same error shapes as the app's client. */

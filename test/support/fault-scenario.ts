@@ -2,13 +2,15 @@ import { randomUUID } from 'node:crypto';
 import { setTimeout as sleep } from 'node:timers/promises';
 import { createDataSource } from '../../server/db/data-source';
 import { ScanQueue } from '../../src/lib/storage/scan-queue';
-import { ApiProcess, OwnCluster, fetchTransport, memoryStorage } from './fault-rig';
+import { ApiProcess, OwnCluster, fetchTransport, killOneWorker, memoryStorage } from './fault-rig';
 
 export interface FaultScenario {
   clients: number;
   totalScans: number;
   apiPort: number;
   pgPort: number;
+  /** Run the API as a cluster of this many processes (npm start's way) and kill one worker at a time. */
+  workers?: number;
 }
 
 export interface FaultOutcome {
@@ -29,12 +31,25 @@ export interface FaultOutcome {
  * Simulated hunters log notes into the app's own offline queue while the API process is killed twice
  * and PostgreSQL restarted once; afterwards the database must hold every note exactly once.
  */
-export async function runFaultScenario({ clients, totalScans, apiPort, pgPort }: FaultScenario): Promise<FaultOutcome> {
+export async function runFaultScenario({ clients, totalScans, apiPort, pgPort, workers }: FaultScenario): Promise<FaultOutcome> {
   const started = Date.now();
   let failedCalls = 0;
   const cluster = new OwnCluster(`pg-faults-${pgPort}`, pgPort);
   cluster.start();
-  const api = new ApiProcess(apiPort, { DATABASE_URL: cluster.url, JWT_SECRET: 'fault-rig-secret-0123456789-abcdefghijklmnop', NODE_ENV: 'test' });
+  const api = new ApiProcess(
+    apiPort,
+    {
+      DATABASE_URL: cluster.url,
+      JWT_SECRET: 'fault-rig-secret-0123456789-abcdefghijklmnop',
+      NODE_ENV: 'test',
+      // Each simulated hunter signs up from an address of its own, as if behind a balancer on loopback.
+      TRUSTED_PROXIES: '127.0.0.1',
+      ...(workers ? { WORKERS: String(workers) } : {}),
+    },
+    workers ? { script: 'server/cluster.ts' } : {},
+  );
+  // One process: kill and start it again. A cluster: kill one worker; its primary starts another.
+  const crash = () => (workers ? killOneWorker(api.baseUrl).then(() => undefined) : api.restart());
   try {
     const migrator = createDataSource(cluster.url);
     await migrator.initialize();
@@ -45,7 +60,7 @@ export async function runFaultScenario({ clients, totalScans, apiPort, pgPort }:
     const hunters = await Promise.all(
       Array.from({ length: clients }, async (_, index) => {
         const email = `fault-${index}-${randomUUID().slice(0, 6)}@strapsift.test`;
-        const session = await postJson(`${api.baseUrl}/api/auth/register`, { email, password: 'fault-rig-password', displayName: `Hunter ${index}` });
+        const session = await postJson(`${api.baseUrl}/api/auth/register`, { email, password: 'fault-rig-password', displayName: `Hunter ${index}` }, undefined, `10.0.0.${index + 1}`);
         const hunt = await postJson(
           `${api.baseUrl}/api/hunts`,
           { title: `Fault hunt ${index}`, source: 'Larkspur Valley CU', denomination: 1, plannedStraps: 400 },
@@ -91,11 +106,11 @@ export async function runFaultScenario({ clients, totalScans, apiPort, pgPort }:
     });
     const chaos = (async () => {
       await sleep(700);
-      await api.restart();
+      await crash();
       await sleep(700);
       cluster.restart();
       await sleep(700);
-      await api.restart();
+      await crash();
     })();
     await Promise.all([...producers, chaos]);
 
@@ -132,10 +147,10 @@ export async function runFaultScenario({ clients, totalScans, apiPort, pgPort }:
   }
 }
 
-async function postJson(url: string, body: unknown, token?: string) {
+async function postJson(url: string, body: unknown, token?: string, from?: string) {
   const response = await fetch(url, {
     method: 'POST',
-    headers: { 'Content-Type': 'application/json', ...(token ? { Authorization: `Bearer ${token}` } : {}) },
+    headers: { 'Content-Type': 'application/json', ...(token ? { Authorization: `Bearer ${token}` } : {}), ...(from ? { 'X-Forwarded-For': from } : {}) },
     body: JSON.stringify(body),
   });
   if (!response.ok) throw new Error(`${url} answered ${response.status}: ${await response.text()}`);

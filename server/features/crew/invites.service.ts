@@ -2,7 +2,7 @@ import type { DataSource } from 'typeorm';
 import { INVITE_DAYS, type InviteAccepted, type InviteList, type InvitePreview, type InviteView } from '../../../shared/contracts/invites';
 import { HttpError, conflict, notFound } from '../../lib/errors';
 import { logger } from '../../lib/logger';
-import { renderMail, type Mailer } from '../../lib/mail';
+import { oneLine, renderMail, type Mailer } from '../../lib/mail';
 import { hashSecretToken, newSecretToken } from '../../lib/secret-token';
 import { huntAccess, requireOwner } from './hunt-access';
 import { CrewInviteEntity } from './crew-invite.entity';
@@ -53,7 +53,7 @@ export class InvitesService {
       [userId],
     )) as Array<{ n: number }>;
     if ((recent?.n ?? 0) >= MAX_INVITES_PER_HOUR) {
-      throw new HttpError(429, 'too_many_invites', `At most ${MAX_INVITES_PER_HOUR} invitations an hour; try again later`);
+      throw new HttpError(429, 'too_many_invites', `At most ${MAX_INVITES_PER_HOUR} invitations an hour; try again later`, undefined, 60 * 60);
     }
     const [inviter] = (await this.dataSource.query(`SELECT display_name FROM users WHERE id = $1`, [userId])) as Array<{ display_name: string }>;
     const token = newSecretToken();
@@ -73,11 +73,11 @@ export class InvitesService {
       { text: `${inviter?.display_name ?? 'A Strapsift user'} invites you to sift straps together in the hunt “${access.hunt.title}” on Strapsift.` },
       { text: 'As crew you log the notes of your own straps into the shared hunt; the owner sees every strap sheet add up.' },
       { link, label: 'Accept the invitation' },
-      { text: `Sign in, or create an account with any e-mail, and the hunt appears in your list. The link works once, for ${INVITE_DAYS} days.` },
+      { text: `Sign in, or create an account, with this e-mail address (${email}), and the hunt appears in your list. The link works once, for ${INVITE_DAYS} days, while the hunt is open.` },
       { small: 'If you do not know the sender, ignore this mail; nothing happens unless you accept.' },
     ]);
     try {
-      await this.mailer.send({ to: email, subject: `${inviter?.display_name ?? 'Someone'} invites you to a Strapsift hunt`, ...body });
+      await this.mailer.send({ to: email, subject: oneLine(`${inviter?.display_name ?? 'Someone'} invites you to a Strapsift hunt`), ...body });
     } catch (error) {
       await this.invites().delete({ id: invite.id });
       logger.error({ err: error, inviteId: invite.id }, 'invitation mail could not be sent');
@@ -107,10 +107,17 @@ export class InvitesService {
     return { invite, huntTitle: rows[0].title, invitedBy: rows[0].display_name };
   }
 
+  private async huntClosed(huntId: string): Promise<boolean> {
+    const [row] = (await this.dataSource.query(`SELECT status FROM hunts WHERE id = $1`, [huntId])) as Array<{ status: string }>;
+    return row?.status === 'closed';
+  }
+
   /** What the accept page shows to anyone holding the link, signed in or not. */
   async preview(token: string): Promise<InvitePreview> {
     const { invite, huntTitle, invitedBy } = await this.byToken(token);
-    const status = invite.acceptedAt ? 'accepted' : invite.expiresAt.getTime() <= Date.now() ? 'expired' : 'open';
+    // A closed hunt takes no new crew, so its open invitations read as expired.
+    const dead = invite.expiresAt.getTime() <= Date.now() || (await this.huntClosed(invite.huntId));
+    const status = invite.acceptedAt ? 'accepted' : dead ? 'expired' : 'open';
     return { huntTitle, invitedBy, email: invite.email, expiresAt: invite.expiresAt.toISOString(), status };
   }
 
@@ -121,20 +128,31 @@ export class InvitesService {
   async accept(userId: string, token: string): Promise<InviteAccepted> {
     const tokenHash = hashSecretToken(token);
     return this.dataSource.transaction(async (manager) => {
+      // Only the invited address may accept, and only while the hunt is open: a forwarded or leaked link
+      // opens nothing for anyone else.
       const spent = (await manager.query(
-        `UPDATE crew_invites SET accepted_at = now(), accepted_by = $2
-          WHERE token_hash = $1 AND accepted_at IS NULL AND expires_at > now() RETURNING hunt_id`,
+        `UPDATE crew_invites i SET accepted_at = now(), accepted_by = $2
+           FROM hunts h, users u
+          WHERE i.token_hash = $1 AND i.accepted_at IS NULL AND i.expires_at > now()
+            AND h.id = i.hunt_id AND h.status <> 'closed' AND u.id = $2 AND u.email = i.email
+          RETURNING i.hunt_id`,
         [tokenHash, userId],
       )) as [Array<{ hunt_id: string }>, number];
       const huntId = spent[0][0]?.hunt_id;
       if (!huntId) {
-        const [known] = (await manager.query(`SELECT hunt_id, accepted_by FROM crew_invites WHERE token_hash = $1`, [tokenHash])) as Array<{
-          hunt_id: string;
-          accepted_by: string | null;
-        }>;
+        const [known] = (await manager.query(
+          `SELECT i.hunt_id, i.accepted_by, i.accepted_at, i.expires_at, h.status, (u.email = i.email) AS addressed
+             FROM crew_invites i JOIN hunts h ON h.id = i.hunt_id LEFT JOIN users u ON u.id = $2
+            WHERE i.token_hash = $1`,
+          [tokenHash, userId],
+        )) as Array<{ hunt_id: string; accepted_by: string | null; accepted_at: Date | null; expires_at: Date; status: string; addressed: boolean }>;
         // Opening one's own accepted link again just leads back to the hunt.
         if (known && known.accepted_by === userId) return { huntId: known.hunt_id, alreadyMember: true };
         if (!known) throw notFound('This invitation does not exist or was withdrawn');
+        if (known.status === 'closed') throw new HttpError(410, 'hunt_closed', 'This hunt is closed; crew can no longer join it');
+        if (!known.accepted_at && known.expires_at.getTime() > Date.now() && !known.addressed) {
+          throw new HttpError(403, 'wrong_account', 'This invitation was sent to another e-mail address; sign in with that address to accept it');
+        }
         throw new HttpError(410, 'invite_used', 'This invitation was already used or has expired; ask the owner for a new one');
       }
       const added: unknown[] = await manager.query(

@@ -8,9 +8,9 @@ export function healthRoutes(dataSource: DataSource): Router {
     try {
       // A real round trip, so "ok" means the database answers, not merely that it was configured.
       await dataSource.query('SELECT 1');
-      res.json({ ok: true, db: 'up', version: appVersion });
+      res.json({ ok: true, db: 'up', version: appVersion, pid: process.pid });
     } catch {
-      res.status(503).json({ ok: false, db: 'down', version: appVersion });
+      res.status(503).json({ ok: false, db: 'down', version: appVersion, pid: process.pid });
     }
   });
   return router;

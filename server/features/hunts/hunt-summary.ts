@@ -7,7 +7,7 @@ import { route } from '../../lib/async-route';
 import { currentUser } from '../../lib/auth-middleware';
 import { HttpError } from '../../lib/errors';
 import { logger } from '../../lib/logger';
-import { renderMail, type Mailer } from '../../lib/mail';
+import { oneLine, renderMail, type Mailer } from '../../lib/mail';
 import { idsOf } from '../../lib/patterns';
 import { parse } from '../../lib/validate';
 import { huntAccess, requireOwner } from '../crew/hunt-access';
@@ -78,7 +78,7 @@ export class HuntSummaryService {
       { small: figures.caveat },
     ]);
     try {
-      await this.mailer.send({ to, subject: `Strapsift hunt summary: ${hunt.title}`, ...body });
+      await this.mailer.send({ to, subject: oneLine(`Strapsift hunt summary: ${hunt.title}`), ...body });
     } catch (error) {
       logger.error({ err: error, huntId }, 'hunt summary mail could not be sent');
       throw new HttpError(502, 'mail_failed', 'The summary could not be sent just now; try again in a minute');

@@ -13,7 +13,7 @@ import type {
 import type { PhotoView } from '../../../shared/contracts/photos';
 import { z } from 'zod';
 import { containsPattern } from '../../lib/like';
-import { decodeCursor, encodeCursor } from '../../lib/cursor';
+import { assertCursorKind, decodeCursor, encodeCursor } from '../../lib/cursor';
 import { HttpError, notFound } from '../../lib/errors';
 import { idsOf, maskOf } from '../../lib/patterns';
 import type { ReadingContext, WeightsService } from '../weights/weights.service';
@@ -144,6 +144,7 @@ export class KeepersService {
       );
     }
     if (after) {
+      assertCursorKind(after[0], sort.kind);
       const cast = sort.kind === 'time' ? '::timestamptz' : sort.kind === 'number' ? '::float8' : '::text';
       params.push(after[0], after[1]);
       const op = sort.dir === 'DESC' ? '<' : '>';

@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import type { DataSource } from 'typeorm';
 import type { PhotoSide, PhotoView } from '../../../shared/contracts/photos';
-import { conflict, notFound } from '../../lib/errors';
+import { HttpError, conflict, notFound } from '../../lib/errors';
 import { preparePhoto } from '../../lib/image';
 import { logger } from '../../lib/logger';
 import type { ObjectStore } from '../../lib/object-store';
@@ -33,6 +33,9 @@ export interface PhotoBytes {
   contentType: string;
   etag: string;
 }
+
+/** Per-account photo ceilings. */
+export const PHOTO_QUOTA = { photos: 1_000, bytes: 2 * 1024 ** 3 } as const;
 
 export class PhotosService {
   constructor(
@@ -78,6 +81,7 @@ export class PhotosService {
    */
   async upload(userId: string, keeperId: string, side: PhotoSide, bytes: Buffer): Promise<PhotoView> {
     await this.ownedKeeper(userId, keeperId);
+    await this.checkQuota(userId, keeperId, side, bytes.length);
     const prepared = await preparePhoto(bytes);
     const id = randomUUID();
     const folder = `${userPrefix(userId)}keepers/${keeperId}/`;
@@ -119,6 +123,24 @@ export class PhotosService {
   }
 
   /** The bytes of the owner's photo (or its thumbnail). */
+  /**
+   * Generous per-account ceilings (two photos a keeper for hundreds of keepers): past them the answer is a
+   * 413 saying which. A new photo of a side that already has one replaces it, so it is not counted twice.
+   */
+  private async checkQuota(userId: string, keeperId: string, side: PhotoSide, incoming: number): Promise<void> {
+    const [usage] = (await this.dataSource.query(
+      `SELECT count(*)::int AS photos, COALESCE(sum(byte_size), 0)::float8 AS bytes
+         FROM photos WHERE user_id = $1 AND NOT (keeper_id = $2 AND side = $3)`,
+      [userId, keeperId, side],
+    )) as Array<{ photos: number; bytes: number }>;
+    if ((usage?.photos ?? 0) + 1 > PHOTO_QUOTA.photos) {
+      throw new HttpError(413, 'quota_exceeded', `Your account holds ${PHOTO_QUOTA.photos.toLocaleString('en-US')} photos, the most it can keep; delete some to add more`);
+    }
+    if ((usage?.bytes ?? 0) + incoming > PHOTO_QUOTA.bytes) {
+      throw new HttpError(413, 'quota_exceeded', `Your photos fill the ${PHOTO_QUOTA.bytes / 1024 ** 3} GB your account can keep; delete some to add more`);
+    }
+  }
+
   async bytes(userId: string, keeperId: string, photoId: string, thumb: boolean): Promise<PhotoBytes> {
     const photo = await this.photos().findOne({ where: { id: photoId, keeperId, userId } });
     if (!photo) throw notFound('No such photo');

@@ -3,10 +3,11 @@ import { idParams } from '../../../shared/contracts/common';
 import { scanBatchEnvelope, scanListQuery } from '../../../shared/contracts/scans';
 import { route } from '../../lib/async-route';
 import { currentUser } from '../../lib/auth-middleware';
+import type { Limits } from '../../lib/rate-limit';
 import { parse } from '../../lib/validate';
 import type { ScansService } from './scans.service';
 
-export function scansRoutes(scans: ScansService, requireAuth: RequestHandler): Router {
+export function scansRoutes(scans: ScansService, requireAuth: RequestHandler, limits: Pick<Limits, 'scansPerDay'>): Router {
   const router = Router();
   router.post(
     '/scans/batch',
@@ -15,7 +16,12 @@ export function scansRoutes(scans: ScansService, requireAuth: RequestHandler): R
       // The envelope and ids are checked here; each scan's other fields are checked one by one in the
       // service, so a single bad note is rejected on its own instead of failing the batch.
       const { scans: items } = parse(scanBatchEnvelope, req.body);
-      res.json(await scans.storeBatch(currentUser(req).id, items));
+      const userId = currentUser(req).id;
+      // Notes a day per account (shared by every app process): generous, but a runaway script stops.
+      await limits.scansPerDay.check(userId, `This account has logged ${limits.scansPerDay.rule.points.toLocaleString('en-US')} notes in a day, the most it takes; the rest stay queued on your device and go up later`);
+      const answer = await scans.storeBatch(userId, items);
+      if (answer.stored.length) await limits.scansPerDay.penalise(userId, answer.stored.length);
+      res.json(answer);
     }),
   );
   router.delete(

@@ -3,6 +3,7 @@ import Papa from 'papaparse';
 import type { DataSource } from 'typeorm';
 import type { ExportKind } from '../../../shared/contracts/transfer';
 import { idsOf } from '../../lib/patterns';
+import { csvCell } from './csv-cell';
 
 type Row = Record<string, unknown>;
 
@@ -151,8 +152,8 @@ export class ExportService {
   }
 
   /**
-   * One kind as CSV, streamed page by page. Cells that a spreadsheet would run as a formula (=, +, -, @)
-   * are escaped by papaparse with a leading quote mark.
+   * One kind as CSV, streamed page by page. Cells that a spreadsheet would run as a formula (=, +, -, @,
+   * tab, CR), multi-line ones included, get a leading apostrophe (csv-cell.ts).
    */
   async csv(res: Response, userId: string, kind: ExportKind): Promise<void> {
     const columns = CSV_COLUMNS[kind];
@@ -162,7 +163,8 @@ export class ExportService {
     res.setHeader('Cache-Control', 'no-store');
     await write(res, `${Papa.unparse([columns], { newline: '\r\n' })}\r\n`);
     for await (const rows of this.pages(kind, userId)) {
-      await write(res, `${Papa.unparse({ fields: columns, data: rows.map((row) => columns.map((c) => row[c] ?? '')) }, { header: false, escapeFormulae: true, newline: '\r\n' })}\r\n`);
+      const data = rows.map((row) => columns.map((c) => csvCell(row[c] ?? '')));
+      await write(res, `${Papa.unparse({ fields: columns, data }, { header: false, newline: '\r\n' })}\r\n`);
     }
     res.end();
   }

@@ -1,4 +1,4 @@
-import type { DataSource } from 'typeorm';
+import type { DataSource, EntityManager } from 'typeorm';
 import type { ImportRow, ImportRowsRequest, ImportRowsResponse } from '../../../shared/contracts/transfer';
 import { parseSerial } from '../../../shared/engine';
 import { HttpError } from '../../lib/errors';
@@ -20,14 +20,26 @@ const strapOfLine = (line: number) => Math.min(1000, Math.floor((line - 2) / 100
  * any hunt, adds nothing the second time. A dated row whose serial is already stored with the very
  * same time (an export of Strapsift imported back) is a duplicate too.
  */
+/** The scans and keepers services bound to one transaction's manager. */
+export type ScopedWriters = (manager: EntityManager) => { scans: Pick<ScansService, 'storeBatch'>; keepers: Pick<KeepersService, 'create'> };
+
 export class ImportService {
   constructor(
     private readonly dataSource: DataSource,
-    private readonly scans: ScansService,
-    private readonly keepers: KeepersService,
+    private readonly writers: ScopedWriters,
   ) {}
 
+  /**
+   * One part is atomic: its notes and keepers go in inside one transaction, so a failure half-way (a
+   * database error, a lost connection) leaves none of them, and the client's retry of the part is safe.
+   * Rows the checks refuse are reported and skipped; that is a verdict on the row, not a failure.
+   */
   async importRows(userId: string, request: ImportRowsRequest): Promise<ImportRowsResponse> {
+    return this.dataSource.transaction((manager) => this.importWith(manager, userId, request));
+  }
+
+  private async importWith(manager: EntityManager, userId: string, request: ImportRowsRequest): Promise<ImportRowsResponse> {
+    const { scans, keepers: keeperWriter } = this.writers(manager);
     const { hunt } = await huntAccess(this.dataSource, request.huntId, userId);
     const rejected: ImportRowsResponse['rejected'] = [];
     const ready: Array<{ id: string; digits: string; row: ImportRow; scannedAt: string }> = [];
@@ -47,7 +59,7 @@ export class ImportService {
     const dated = ready.filter((item) => item.row.date);
     const sameTime = new Set<string>();
     if (dated.length) {
-      const rows: Array<{ digits: string; scanned_at: Date }> = await this.dataSource.query(
+      const rows: Array<{ digits: string; scanned_at: Date }> = await manager.query(
         `SELECT s.digits, s.scanned_at FROM scans s
            JOIN unnest($2::varchar[], $3::timestamptz[]) AS t(digits, scanned_at) ON t.digits = s.digits AND t.scanned_at = s.scanned_at
           WHERE s.user_id = $1 AND NOT (s.id = ANY($4::uuid[]))`,
@@ -60,7 +72,7 @@ export class ImportService {
 
     const byId = new Map(fresh.map((item) => [item.id, item]));
     const result = fresh.length
-      ? await this.scans.storeBatch(
+      ? await scans.storeBatch(
           userId,
           fresh.map((item) => ({
             id: item.id,
@@ -83,7 +95,7 @@ export class ImportService {
       const item = byId.get(id);
       if (!item || item.row.pulled !== true) continue;
       try {
-        const { created } = await this.keepers.create(userId, {
+        const { created } = await keeperWriter.create(userId, {
           scanId: id,
           series: item.row.series ?? undefined,
           district: item.row.district ?? undefined,

@@ -1,4 +1,4 @@
-import { authResponse, type LoginRequest, type RegisterRequest } from '@shared/contracts/auth';
+import { authResponse, undoEmailResponse, type LoginRequest, type RegisterRequest } from '@shared/contracts/auth';
 import { api } from '@/lib/api/client';
 
 export const signInRequest = (body: LoginRequest) =>
@@ -12,3 +12,6 @@ export const forgotPasswordRequest = (email: string) =>
 
 export const resetPasswordRequest = (token: string, password: string) =>
   api('/auth/reset', { method: 'POST', body: { token, password }, anonymous: true });
+
+export const undoEmailChangeRequest = (token: string) =>
+  api('/auth/undo-email-change', { method: 'POST', body: { token }, anonymous: true, schema: undoEmailResponse });

@@ -1,3 +1,4 @@
+import { PASSWORD_RULE } from '@shared/contracts/auth';
 import { useState } from 'react';
 import { router, useLocalSearchParams } from 'expo-router';
 import { Button } from '@/components/ui/button';
@@ -41,7 +42,7 @@ export function CreateAccountScreen() {
         onChangeText={setPassword}
         secureTextEntry
         autoComplete="new-password"
-        hint="At least 10 characters."
+        hint={PASSWORD_RULE}
         error={fields.password}
         onSubmitEditing={() => void submit()}
         testID="create-password"

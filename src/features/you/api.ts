@@ -1,4 +1,5 @@
-import { importRowsResponse, publicUser, type ImportRowsRequest, type UpdateMeRequest } from '@shared/contracts';
+import useSWR from 'swr';
+import { deviceSessionList, importRowsResponse, publicUser, type ImportRowsRequest, type UpdateMeRequest } from '@shared/contracts';
 import { api, apiBlob } from '@/lib/api/client';
 
 export const updateMe = (body: UpdateMeRequest) => api('/me', { method: 'PATCH', body, schema: publicUser });
@@ -15,3 +16,12 @@ export async function downloadExport(file: ExportFile): Promise<{ name: string; 
 
 /** One part (≤ 500 rows) of an import. */
 export const importRows = (body: ImportRowsRequest) => api('/import/rows', { method: 'POST', body, schema: importRowsResponse });
+
+export const sessionKeys = { list: '/me/sessions' } as const;
+
+/** The account's signed-in devices, newest use first. */
+export function useDeviceSessions() {
+  return useSWR(sessionKeys.list, (path: string) => api(path, { schema: deviceSessionList }));
+}
+export const endDeviceSession = (id: string) => api(`/me/sessions/${id}`, { method: 'DELETE' });
+export const endAllSessions = () => api('/me/sessions/end-all', { method: 'POST' });

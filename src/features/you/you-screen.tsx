@@ -13,9 +13,11 @@ import { useSession } from '@/lib/session/session-provider';
 import { useThemeState, type ThemePreference } from '@/theme/theme-provider';
 import { useLayout } from '@/theme/use-layout';
 import { space } from '@/theme/tokens';
+import { PASSWORD_RULE } from '@shared/contracts/auth';
 import { deleteMe, updateMe } from './api';
 import { ArchiveExportCard } from './components/archive-export-card';
 import { ArchiveRestoreCard } from './components/archive-restore-card';
+import { DevicesCard } from './components/devices-card';
 import { ExportCard } from './components/export-card';
 import { ImportCard } from './components/import-card';
 
@@ -32,22 +34,24 @@ export function YouScreen() {
   const [displayName, setDisplayName] = useState(user?.displayName ?? '');
   const [email, setEmail] = useState(user?.email ?? '');
   const [currentPassword, setCurrentPassword] = useState('');
+  const [emailPassword, setEmailPassword] = useState('');
   const [newPassword, setNewPassword] = useState('');
   const [confirmText, setConfirmText] = useState('');
   const [done, setDone] = useState<string | null>(null);
 
   const profile = useSubmit(async () => {
-    const next = await updateMe({ displayName, email });
+    const emailChanged = email.trim().toLowerCase() !== user?.email;
+    const next = await updateMe(emailChanged ? { displayName, email, currentPassword: emailPassword } : { displayName });
     updateUser({ id: next.id, email: next.email, displayName: next.displayName, role: next.role });
-    setDone('Profile saved.');
+    setEmailPassword('');
+    setDone(emailChanged ? 'Profile saved. Your other devices were signed out, and your old address got a link to undo the change.' : 'Profile saved.');
   });
   const password = useSubmit(async () => {
     await updateMe({ currentPassword, newPassword });
     setCurrentPassword('');
     setNewPassword('');
-    // A new password ends every session, this one included.
-    await signOut();
-    router.replace('/sign-in');
+    // A new password ends every other session; this device stays signed in.
+    setDone('Password changed. Your other devices were signed out.');
   });
   const removal = useSubmit(async () => {
     await deleteMe();
@@ -65,6 +69,18 @@ export function YouScreen() {
       {done ? <Notice tone="ok">{done}</Notice> : null}
       <Field label="Name" value={displayName} onChangeText={setDisplayName} error={profile.fields.displayName} testID="you-name" />
       <Field label="E-mail" value={email} onChangeText={setEmail} autoCapitalize="none" keyboardType="email-address" error={profile.fields.email} />
+      {email.trim().toLowerCase() !== user?.email ? (
+        <Field
+          label="Current password"
+          value={emailPassword}
+          onChangeText={setEmailPassword}
+          secureTextEntry
+          autoComplete="current-password"
+          hint="Needed to change the e-mail."
+          error={profile.fields.currentPassword}
+          testID="you-email-password"
+        />
+      ) : null}
       <Button label="Save profile" busy={profile.busy} onPress={() => void profile.submit()} testID="you-save" />
     </Card>
   );
@@ -76,7 +92,7 @@ export function YouScreen() {
       </Text>
       {password.message ? <Notice tone="error">{password.message}</Notice> : null}
       <Field label="Current password" value={currentPassword} onChangeText={setCurrentPassword} secureTextEntry autoComplete="current-password" error={password.fields.currentPassword} />
-      <Field label="New password" value={newPassword} onChangeText={setNewPassword} secureTextEntry autoComplete="new-password" hint="At least 10 characters. You will sign in again." error={password.fields.newPassword} />
+      <Field label="New password" value={newPassword} onChangeText={setNewPassword} secureTextEntry autoComplete="new-password" hint={PASSWORD_RULE} error={password.fields.newPassword} />
       <Button kind="secondary" label="Change password" busy={password.busy} disabled={!currentPassword || !newPassword} onPress={() => void password.submit()} />
     </Card>
   );
@@ -117,6 +133,7 @@ export function YouScreen() {
           <View style={styles.column}>
             {account}
             {passwordCard}
+            <DevicesCard />
           </View>
           <View style={styles.column}>
             {look}
@@ -129,6 +146,7 @@ export function YouScreen() {
           {look}
           {account}
           {passwordCard}
+          <DevicesCard />
           {data}
           {danger}
         </>

@@ -68,7 +68,11 @@ export function SessionProvider({ children }: { children: ReactNode }) {
       ready,
       user: session?.user ?? null,
       signIn: (answer) => store(toStored(answer)),
-      signOut: () => store(null),
+      signOut: async () => {
+        // Ends the sign-in on the server too, so the refresh token is dead even if a copy exists.
+        if (current.current?.token) await api('/auth/logout', { method: 'POST' }).catch(() => undefined);
+        await store(null);
+      },
       updateUser: (user) => {
         if (current.current) void store({ ...current.current, user });
       },

@@ -23,8 +23,9 @@ const root = resolve(__dirname, '../../..');
 const write = !process.argv.includes('--no-write');
 const port = Number(process.env.PGPORT ?? 54329);
 const DB = 'strapsift_bench';
-const adminUrl = `postgres://postgres@127.0.0.1:${port}/postgres`;
-const benchUrl = `postgres://postgres@127.0.0.1:${port}/${DB}`;
+// The scripts pass the superuser's URL (the local cluster takes passwords only).
+const adminUrl = process.env.PG_ADMIN_URL ?? `postgres://postgres@127.0.0.1:${port}/postgres`;
+const benchUrl = adminUrl.replace(/\/[^/]*$/, `/${DB}`);
 
 const BATCH = 1000;
 const BATCH_RUNS = 30;

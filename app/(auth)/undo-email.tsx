@@ -1,0 +1,1 @@
+export { UndoEmailScreen as default } from '@/features/auth/undo-email-screen';
