@@ -12,3 +12,5 @@ node_modules/.bin/tsx test/bench/engine/engine-bench.ts "$@"
 ensure_postgres
 say "API bench"
 node_modules/.bin/tsx test/bench/api/api-bench.ts "$@"
+say "camera bench (serial cards)"
+node_modules/.bin/tsx test/bench/camera/camera-bench.ts "$@"

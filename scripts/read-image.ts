@@ -8,6 +8,7 @@
  * `accepted` is what the camera would do with that single frame. A file that cannot be read gives
  * ok: false and a reason; the run goes on. Exit status 0 when the run completed, 2 for bad usage.
  */
+import { stat } from 'node:fs/promises';
 import { acceptedAlone } from '../shared/ocr/acceptance';
 import { createNodeEngine } from '../src/lib/ocr/node-engine';
 import { greyFromFile } from '../src/lib/ocr/node-image';
@@ -65,6 +66,9 @@ async function main(argv: string[]): Promise<number> {
     for (const file of files) {
       let result: FileResult;
       try {
+        const kind = await stat(file).catch((error: unknown) => error as NodeJS.ErrnoException);
+        if (kind instanceof Error) throw kind;
+        if (kind.isDirectory()) throw Object.assign(new Error('EISDIR'), { code: 'EISDIR' });
         const image = await greyFromFile(file);
         const { read, reason } = await recogniseSerial(engine, image);
         result = read
