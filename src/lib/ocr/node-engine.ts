@@ -17,7 +17,7 @@ export async function createNodeEngine(): Promise<OcrEngine & { close(): Promise
     legacyCore: false,
     legacyLang: false,
   }, TESSERACT_INIT);
-  const tune = tuner(worker);
+  const tune = tuner(worker as unknown as Parameters<typeof tuner>[0]);
   return {
     async read(image: GreyImage, open: boolean) {
       await tune(open);
