@@ -14,6 +14,7 @@ import { useThemeState, type ThemePreference } from '@/theme/theme-provider';
 import { useLayout } from '@/theme/use-layout';
 import { space } from '@/theme/tokens';
 import { deleteMe, updateMe } from './api';
+import { CameraSettingsCard } from '../camera/camera-settings-card';
 import { ExportCard } from './components/export-card';
 import { ImportCard } from './components/import-card';
 
@@ -101,6 +102,7 @@ export function YouScreen() {
 
   const data = (
     <>
+      <CameraSettingsCard />
       <ExportCard />
       <ImportCard />
     </>

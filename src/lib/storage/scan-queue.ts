@@ -10,6 +10,10 @@ export interface QueuedScan {
   star: boolean;
   pulled: boolean;
   scannedAt: string;
+  /** How the serial came in; notes queued before camera mode have neither field (the server reads keypad). */
+  entryMethod?: 'keypad' | 'camera';
+  /** The camera's confidence in the whole serial, 0–1; null for typed notes. */
+  cameraConfidence?: number | null;
 }
 
 export interface RejectedScan {
