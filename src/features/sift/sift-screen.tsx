@@ -111,7 +111,7 @@ export function SiftScreen() {
         pulled: note.pulled,
         scannedAt: now,
         entryMethod: from.method,
-        cameraConfidence: from.method === 'camera' ? Math.round(from.confidence * 1000) / 1000 : null,
+        ...(from.method === 'camera' ? { cameraConfidence: Math.round(from.confidence * 1000) / 1000 } : {}),
       });
       await logged.add(loggedKey(note));
       const completed = await session.log({

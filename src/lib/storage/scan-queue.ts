@@ -12,8 +12,8 @@ export interface QueuedScan {
   scannedAt: string;
   /** How the serial came in; notes queued before camera mode have neither field (the server reads keypad). */
   entryMethod?: 'keypad' | 'camera';
-  /** The camera's confidence in the whole serial, 0–1; null for typed notes. */
-  cameraConfidence?: number | null;
+  /** The camera's confidence in the whole serial, 0–1; absent for typed notes. */
+  cameraConfidence?: number;
 }
 
 export interface RejectedScan {
