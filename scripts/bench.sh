@@ -7,6 +7,7 @@ source "$(dirname "$0")/lib/common.sh"
 trap stop_postgres_if_started EXIT
 ensure_node_modules
 command -v cc >/dev/null || apt_install gcc
+ensure_card_fonts
 say "engine bench"
 node_modules/.bin/tsx test/bench/engine/engine-bench.ts "$@"
 ensure_postgres
