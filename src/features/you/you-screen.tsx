@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { lazy, Suspense, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { router } from 'expo-router';
 import { Button } from '@/components/ui/button';
@@ -16,7 +16,10 @@ import { space } from '@/theme/tokens';
 import { deleteMe, updateMe } from './api';
 import { CameraSettingsCard } from '../camera/camera-settings-card';
 import { ExportCard } from './components/export-card';
-import { ImportCard } from './components/import-card';
+
+// The importer brings papaparse and the log checker (about 9 KB gzipped) that few visits need, so it
+// loads when You is opened rather than with the app (first-load budget, issue 11).
+const ImportCard = lazy(() => import('./components/import-card').then((module) => ({ default: module.ImportCard })));
 
 const THEMES: { value: ThemePreference; label: string }[] = [
   { value: 'system', label: 'Match device' },
@@ -104,7 +107,9 @@ export function YouScreen() {
     <>
       <CameraSettingsCard />
       <ExportCard />
-      <ImportCard />
+      <Suspense fallback={null}>
+        <ImportCard />
+      </Suspense>
     </>
   );
 
