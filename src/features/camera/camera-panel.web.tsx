@@ -53,7 +53,6 @@ export function CameraPanel({ onVerdict, onClose, status }: CameraPanelProps) {
     async function start() {
       if (!window.isSecureContext) return setProblem('insecure');
       if (!navigator.mediaDevices?.getUserMedia) return setProblem('unsupported');
-      const engineReady = loadEngine((share, label) => !stopped && setProgress({ share, label }));
       try {
         stream = await navigator.mediaDevices.getUserMedia({
           video: { facingMode: { ideal: 'environment' }, width: { ideal: 1280 }, height: { ideal: 720 } },
@@ -64,6 +63,8 @@ export function CameraPanel({ onVerdict, onClose, status }: CameraPanelProps) {
         return;
       }
       if (stopped) return stream.getTracks().forEach((track) => track.stop());
+      // The reader (about 7 MB the first time) downloads only once the camera is granted.
+      const engineReady = loadEngine((share, label) => !stopped && setProgress({ share, label }));
       const video = videoRef.current;
       if (!video) return;
       video.srcObject = stream;
