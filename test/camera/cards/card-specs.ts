@@ -1,5 +1,6 @@
 import { existsSync } from 'node:fs';
 import { resolve } from 'node:path';
+import { prng } from '../../../server/db/seed/demo-data';
 
 /**
  * What one generated serial card looks like, chosen by a seeded generator so every run draws the same
@@ -62,17 +63,8 @@ const LETTERS = 'ABCDEFGHIJKLMNPQRSTUVWXY';
 const DISTRICTS = 'ABCDEFGHIJKL';
 const INKS = ['#14161a', '#1d3f2c', '#1b2f55', '#4a2416', '#2e5a3a', '#3a3a3a'];
 
-/** mulberry32: a small seeded generator, so the card set is the same on every machine. */
-export function seeded(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+/** The demo seed's mulberry32, so the card sets are the same on every machine. */
+export const seeded = prng;
 
 const pick = <T>(random: () => number, items: ArrayLike<T>): T => items[Math.floor(random() * items.length)]!;
 const between = (random: () => number, low: number, high: number) => low + random() * (high - low);
