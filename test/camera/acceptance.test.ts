@@ -47,6 +47,16 @@ describe('acceptFrame', () => {
   });
 
   it('when the next different note follows, then it is accepted too', () => {
-    expect(run([read('MB12345678C', 0.95), read('MB12345678C', 0.95), read('MB12345679C', 0.95)])).toEqual(['accept', 'held', 'accept']);
+    expect(run([read('MB12345678C', 0.95), read('MB12345678C', 0.95), read('MB87654321D', 0.95)])).toEqual(['accept', 'held', 'accept']);
+  });
+});
+
+describe('acceptFrame near the last accepted serial', () => {
+  it('when frames read a digit off, or the digits shifted by one, from the note just accepted, then three agreeing frames are needed', () => {
+    expect(run([read('MB12345678C', 0.95), read('MB12345670C', 0.95), read('MB12345670C', 0.95)])).toEqual(['accept', 'tentative', 'tentative']);
+    expect(run([read('FD18636534J', 0.95), read('FD86365343J', 0.95), read('FD86365343J', 0.95)])).toEqual(['accept', 'tentative', 'tentative']);
+    // The next note of a sequential strap: three agreeing frames take it.
+    const next = read('MB12345679C', 0.95);
+    expect(run([read('MB12345678C', 0.95), next, next, next])).toEqual(['accept', 'tentative', 'tentative', 'accept']);
   });
 });

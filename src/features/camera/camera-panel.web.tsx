@@ -11,7 +11,7 @@ import { radius, space } from '@/theme/tokens';
 import { BAND } from './band';
 import { CAMERA_PROBLEMS, type CameraProblem, problemFromError } from './camera-errors';
 import type { CameraPanelProps } from './camera-panel-props';
-import { CAMERA_VARIANTS, PRIVACY_NOTE } from './camera-text';
+import { cameraVariants, PRIVACY_NOTE } from './camera-text';
 import { grabBand } from './grab-band.web';
 
 let enginePromise: Promise<OcrEngine> | null = null;
@@ -83,13 +83,13 @@ export function CameraPanel({ onVerdict, onClose, status }: CameraPanelProps) {
       if (stopped) return;
       setProgress(null);
       let acceptance = initialAcceptance;
-      while (!stopped) {
+      for (let frame = 0; !stopped; frame++) {
         await nextVideoFrame(video);
         if (stopped) break;
         const image = grabBand(video, canvas);
         if (!image) continue;
         const startedAt = performance.now();
-        const { read, reason } = await recogniseSerial(engine, image, CAMERA_VARIANTS);
+        const { read, reason } = await recogniseSerial(engine, image, cameraVariants(frame));
         // Named timings let the browser test (and the Performance panel) see what one frame costs.
         performance.measure('camera-frame', { start: startedAt, end: performance.now() });
         if (stopped) break;

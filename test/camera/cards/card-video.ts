@@ -1,7 +1,7 @@
 import { createWriteStream } from 'node:fs';
 import sharp from 'sharp';
 import { BAND } from '../../../src/features/camera/band';
-import type { CardSpec } from './card-specs';
+import { type CardSpec, seeded } from './card-specs';
 import { drawCard } from './draw-card';
 
 export interface VideoOptions {
@@ -14,10 +14,10 @@ export interface VideoOptions {
   moveFrames: number;
 }
 
-export const DEFAULT_VIDEO: VideoOptions = { width: 480, height: 272, fps: 10, holdFrames: 8, moveFrames: 1 };
+export const DEFAULT_VIDEO: VideoOptions = { width: 640, height: 360, fps: 10, holdFrames: 8, moveFrames: 1 };
 
 /** A desk-grey frame with a card scaled to the band's width and centred on it, shifted by `offset` px. */
-async function frameWithCard(card: Buffer, options: VideoOptions, offset: number, blur: number): Promise<Buffer> {
+export async function frameWithCard(card: Buffer, options: VideoOptions, offset: number, blur: number): Promise<Buffer> {
   const targetWidth = Math.round(options.width * BAND.width * 0.95);
   let resized = sharp(card).resize({ width: targetWidth });
   if (blur >= 0.3) resized = resized.blur(blur);
@@ -70,10 +70,18 @@ export async function writeCardVideo(path: string, cards: CardSpec[], options: V
     new Promise<void>((resolve, reject) => (out.write(chunk, (error) => (error ? reject(error) : resolve()))));
   await put(`YUV4MPEG2 W${options.width} H${options.height} F${options.fps}:1 Ip A1:1 C420jpeg\n`);
   let frames = 0;
+  const random = seeded(4242);
   for (const card of cards) {
     const drawn = await drawCard(card);
-    const still = toI420(await frameWithCard(drawn, options, 0, 0), options.width, options.height);
-    for (let i = 0; i < options.holdFrames; i++, frames++) await put(Buffer.concat([Buffer.from('FRAME\n'), still]));
+    // A hand never holds still: each frame sits a pixel or two off, with a little sensor noise of its own.
+    const poses = new Map<number, Buffer>();
+    for (let i = 0; i < options.holdFrames; i++, frames++) {
+      const shift = Math.round((random() - 0.5) * 4);
+      if (!poses.has(shift)) poses.set(shift, await frameWithCard(drawn, options, shift, 0));
+      const frame = Buffer.from(poses.get(shift)!);
+      for (let p = 0; p < frame.length; p++) frame[p] = Math.max(0, Math.min(255, frame[p]! + Math.round((random() - 0.5) * 10)));
+      await put(Buffer.concat([Buffer.from('FRAME\n'), toI420(frame, options.width, options.height)]));
+    }
     for (let i = 1; i <= options.moveFrames; i++, frames++) {
       const shift = Math.round((options.width * 0.6 * i) / options.moveFrames);
       const moving = toI420(await frameWithCard(drawn, options, -shift, 2.5), options.width, options.height);
