@@ -72,7 +72,7 @@ describe('Sift with the camera (Chromium fake camera)', () => {
       await page.getByTestId('camera-progress').waitFor({ timeout: 20_000 });
       await page.getByTestId('camera-progress').waitFor({ state: 'detached', timeout: 120_000 });
       await page.screenshot({ path: 'test-results/screenshots/sift-camera-phone.png' });
-      await page.getByTestId('camera-back').click();
+      await page.getByTestId('mode-switch').click();
       await page.getByTestId('keypad').waitFor();
       await page.evaluate(() => {
         (window as unknown as { __longTasks: number[] }).__longTasks.length = 0;
@@ -102,7 +102,7 @@ describe('Sift with the camera (Chromium fake camera)', () => {
       const frames = await page.evaluate(() => performance.getEntriesByName('camera-frame').map((entry) => entry.duration));
       const longTasks = await page.evaluate(() => (window as unknown as { __longTasks: number[] }).__longTasks.slice());
       await page.screenshot({ path: 'test-results/screenshots/sift-camera-strap-done-phone.png' });
-      await page.getByTestId('camera-back').click();
+      await page.getByTestId('mode-switch').click();
       await page.getByTestId('sync-badge').click();
       await page.getByTestId('sync-text').filter({ hasText: 'All saved' }).waitFor({ timeout: 60_000 });
 

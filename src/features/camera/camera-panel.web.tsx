@@ -148,10 +148,11 @@ export function CameraPanel({ onVerdict, onClose, status }: CameraPanelProps) {
       <Text variant="caption" tone="muted" accessibilityLiveRegion="polite" testID="camera-hint">
         {status ?? hint}
       </Text>
-      <View style={styles.row}>
-        <Button compact kind="secondary" label="Keypad" accessibilityLabel="Switch to the keypad" onPress={onClose} testID="camera-back" />
-        {torch ? <Button compact kind="secondary" label={torch.on ? 'Torch off' : 'Torch on'} onPress={() => void switchTorch()} testID="camera-torch" /> : null}
-      </View>
+      {torch ? (
+        <View style={styles.row}>
+          <Button compact kind="secondary" label={torch.on ? 'Torch off' : 'Torch on'} onPress={() => void switchTorch()} testID="camera-torch" />
+        </View>
+      ) : null}
       <Text variant="caption" tone="faint">
         {PRIVACY_NOTE}
       </Text>
