@@ -19,6 +19,11 @@ export default defineConfig({
       },
       {
         resolve: { alias },
+        // The camera's recogniser in Node: card accuracy on a fixed subset, the parser, the CLI.
+        test: { name: 'camera', include: ['test/camera/**/*.test.ts'], environment: 'node', testTimeout: 180_000 },
+      },
+      {
+        resolve: { alias },
         test: {
           name: 'server',
           include: ['test/server/**/*.test.ts'],

@@ -7,6 +7,7 @@ source "$(dirname "$0")/lib/common.sh"
 trap stop_postgres_if_started EXIT
 ensure_node_modules
 command -v cc >/dev/null || apt_install gcc
+ensure_card_fonts
 say "engine bench"
 node_modules/.bin/tsx test/bench/engine/engine-bench.ts "$@"
 ensure_postgres
@@ -14,6 +15,8 @@ PG_ADMIN_URL="$(admin_database_url postgres)"
 export PG_ADMIN_URL
 say "API bench"
 node_modules/.bin/tsx test/bench/api/api-bench.ts "$@"
+say "camera bench (serial cards)"
+node_modules/.bin/tsx test/bench/camera/camera-bench.ts "$@"
 
 # The archive bench needs an object store: the local fake on its own ports, stopped by PID at the end.
 say "archive bench"

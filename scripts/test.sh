@@ -23,6 +23,7 @@ trap 'echo "0 passed, 1 failed"' ERR
 ensure_node_modules
 ensure_postgres
 [ "${QUICK:-0}" = 1 ] || ensure_chromium
+ensure_card_fonts
 mkdir -p test-results
 
 # Each suite gets a fresh database so runs never depend on each other.

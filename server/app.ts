@@ -68,6 +68,9 @@ export function createApp({ dataSource, webDist, resetMailer, mailer, objectStor
           'style-src': ["'self'", "'unsafe-inline'"],
           'img-src': ["'self'", 'data:', 'blob:'],
           'worker-src': ["'self'"],
+          // The camera's recogniser is WebAssembly compiled in its worker; 'wasm-unsafe-eval' allows exactly
+          // that and no JavaScript eval. Its worker script is our own file, so worker-src stays 'self'.
+          'script-src': ["'self'", "'wasm-unsafe-eval'"],
         },
       },
       crossOriginEmbedderPolicy: false,

@@ -223,3 +223,13 @@ ensure_chromium() {
     apt_install chromium
   fi
 }
+
+# The camera's test cards are drawn in free fonts from Debian as well as the app's own; without them the
+# cards use the fonts that are there (fewer digit shapes), so a missing package only warns when not root.
+ensure_card_fonts() {
+  local missing=()
+  [ -f /usr/share/fonts/truetype/dejavu/DejaVuSansMono.ttf ] || missing+=(fonts-dejavu-core)
+  [ -f /usr/share/fonts/truetype/liberation/LiberationMono-Regular.ttf ] || missing+=(fonts-liberation)
+  [ ${#missing[@]} -eq 0 ] && return 0
+  if as_root; then apt_install "${missing[@]}"; else say "fonts for the camera's test cards missing (${missing[*]}); cards use the app's font only"; fi
+}

@@ -53,13 +53,40 @@ function patchHtml(): void {
   );
 }
 
+/**
+ * The camera's recogniser, served by our own origin and never a CDN: tesseract.js's worker script, the
+ * LSTM-only WebAssembly cores (the worker picks relaxed-SIMD, SIMD or plain by what the device supports;
+ * the legacy engine is not needed for the LSTM model) and the compact English model.
+ */
+function copyRecogniser(): void {
+  const ocr = join(dist, 'ocr');
+  mkdirSync(join(ocr, 'core'), { recursive: true });
+  mkdirSync(join(ocr, 'lang'), { recursive: true });
+  const from = (path: string) => require.resolve(path, { paths: [root] });
+  copyFileSync(from('tesseract.js/dist/worker.min.js'), join(ocr, 'worker.min.js'));
+  for (const build of ['tesseract-core-relaxedsimd-lstm', 'tesseract-core-simd-lstm', 'tesseract-core-lstm']) {
+    copyFileSync(from(`tesseract.js-core/${build}.wasm.js`), join(ocr, 'core', `${build}.wasm.js`));
+  }
+  copyFileSync(from('@tesseract.js-data/eng/4.0.0_best_int/eng.traineddata.gz'), join(ocr, 'lang', 'eng.traineddata.gz'));
+}
+
 async function main(): Promise<void> {
   writeManifest();
   patchHtml();
+  copyRecogniser();
   const { count, size, warnings } = await generateSW({
     globDirectory: dist,
     globPatterns: ['**/*.{js,html,ttf,otf,png,ico,webmanifest,json}'],
-    globIgnores: ['sw.js', 'workbox-*.js', 'metadata.json'],
+    // The recogniser (about 7 MB) is not precached: a hunter who never opens the camera never downloads it.
+    globIgnores: ['sw.js', 'workbox-*.js', 'metadata.json', 'ocr/**'],
+    // Once the camera has loaded it, it is kept, so the camera works offline from then on.
+    runtimeCaching: [
+      {
+        urlPattern: ({ url }) => url.pathname.startsWith('/ocr/'),
+        handler: 'CacheFirst',
+        options: { cacheName: 'strapsift-recogniser', expiration: { maxEntries: 8 } },
+      },
+    ],
     swDest: join(dist, 'sw.js'),
     maximumFileSizeToCacheInBytes: 8 * 1024 * 1024,
     // Every client route opens the cached app shell; the API is never cached by the worker.

@@ -27,6 +27,8 @@ export const tallyFigures = z.object({
   hits: z.number().int(),
   keeps: z.number().int(),
   pulled: z.number().int(),
+  /** How the notes came in: typed on the keypad or read by the camera. */
+  entered: z.object({ keypad: z.number().int(), camera: z.number().int() }),
   perThousand: z.number(),
   lowLimit: z.number().int(),
   patterns: z.array(tallyPatternRow),

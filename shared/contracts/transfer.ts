@@ -12,7 +12,7 @@ export const IMPORT_CHUNK_ROWS = 500;
 export const MAX_IMPORT_ROWS = 100_000;
 
 /** Columns an old log may have; only `serial` is required. */
-export const IMPORT_FIELDS = ['serial', 'date', 'strap', 'series', 'district', 'star', 'pulled', 'note'] as const;
+export const IMPORT_FIELDS = ['serial', 'date', 'strap', 'series', 'district', 'star', 'pulled', 'note', 'entryMethod', 'cameraConfidence'] as const;
 export const importField = z.enum(IMPORT_FIELDS);
 export type ImportField = z.infer<typeof importField>;
 
@@ -35,6 +35,9 @@ export const importRow = z
     star: z.boolean().nullable().optional(),
     pulled: z.boolean().nullable().optional(),
     note: z.string().max(2000, 'must be at most 2,000 characters').nullable().optional(),
+    /** From Strapsift's own export: keypad or camera, and the camera's confidence (0–1). */
+    entryMethod: z.enum(['keypad', 'camera'], { message: 'must be keypad or camera' }).nullable().optional(),
+    cameraConfidence: z.number({ message: 'must be a number from 0 to 1' }).min(0, 'must be 0 or more').max(1, 'must be 1 or less').nullable().optional(),
   })
   .strict();
 export type ImportRow = z.infer<typeof importRow>;

@@ -54,6 +54,8 @@ const SYNONYMS: Record<ImportField, string[]> = {
   star: ['star', 'star note', 'replacement', 'is star'],
   pulled: ['pulled', 'kept', 'keep', 'keeper', 'pull'],
   note: ['note', 'notes', 'comment', 'comments', 'remark', 'remarks', 'memo'],
+  entryMethod: ['entry method', 'entry_method', 'entered', 'entered by', 'input'],
+  cameraConfidence: ['camera confidence', 'camera_confidence', 'confidence'],
 };
 
 /**
@@ -158,6 +160,14 @@ export function checkLog(rows: readonly string[][], mapping: ColumnMapping): Che
     if (parsed.ok && district && parsed.district && parsed.district !== district) {
       warnings.push(`the serial's prefix says district ${parsed.district}, the district column ${district}; the column is kept`);
     }
+    const method = cell('entryMethod').toLowerCase();
+    if (method && method !== 'keypad' && method !== 'camera') problems.push(`entry method: “${cell('entryMethod')}” is not keypad or camera`);
+    const confidenceText = cell('cameraConfidence');
+    const confidence = confidenceText === '' ? null : Number(confidenceText);
+    if (confidence !== null && !(Number.isFinite(confidence) && confidence >= 0 && confidence <= 1)) {
+      problems.push(`camera confidence: “${confidenceText}” is not a number from 0 to 1`);
+    }
+    if (confidence !== null && method !== 'camera') warnings.push('a camera confidence is kept only for notes the camera read');
     const isPulled = pulled.ok && pulled.value === true;
     if (!isPulled && (series || note)) warnings.push('series and note are kept only for pulled notes (they become keepers)');
 
@@ -179,6 +189,8 @@ export function checkLog(rows: readonly string[][], mapping: ColumnMapping): Che
       star: star.value,
       pulled: pulled.value,
       note: note || null,
+      entryMethod: method === 'keypad' || method === 'camera' ? method : null,
+      cameraConfidence: method === 'camera' ? confidence : null,
     });
     if (!candidate.success) {
       const issue = candidate.error.issues[0];

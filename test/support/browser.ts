@@ -22,7 +22,7 @@ export interface BrowserSession {
  * Debian's Chromium through playwright-core, with the flags this closed network needs
  * (no background networking, no component updates) and a throwaway profile.
  */
-export async function openBrowser(viewport: { width: number; height: number }): Promise<BrowserSession> {
+export async function openBrowser(viewport: { width: number; height: number }, extraArgs: string[] = []): Promise<BrowserSession> {
   const profile = mkdtempSync(join(tmpdir(), 'strapsift-chromium-'));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
@@ -38,6 +38,7 @@ export async function openBrowser(viewport: { width: number; height: number }): 
       '--disable-background-networking',
       '--disable-component-update',
       '--disable-sync',
+      ...extraArgs,
     ],
   });
   const page = context.pages()[0] ?? (await context.newPage());

@@ -25,6 +25,7 @@ function figureColumns(lowParam: string): string {
     `count(*) FILTER (WHERE (pattern_mask & ${NON_LOW_MASK}) <> 0 OR value <= ${lowParam})::int AS hits`,
     'count(*) FILTER (WHERE keep)::int AS keeps',
     'count(*) FILTER (WHERE pulled)::int AS pulled',
+    "count(*) FILTER (WHERE entry_method = 'camera')::int AS camera_notes",
     ...perPattern,
   ].join(',\n');
 }
@@ -53,6 +54,7 @@ function figures(row: Record<string, unknown> | undefined, lowLimit: LowLimit, p
     hits,
     keeps: int(row?.keeps),
     pulled: int(row?.pulled),
+    entered: { keypad: notes - int(row?.camera_notes), camera: int(row?.camera_notes) },
     perThousand: perThousand(hits, notes),
     lowLimit,
     patterns: expected.rows.map((r) => ({

@@ -52,7 +52,7 @@ const SOURCES: Record<ExportKind, Source> = {
   },
   scans: {
     sql: `SELECT s.id, s.hunt_id, h.title AS hunt, s.strap, s.serial, s.digits, s.star, s.district, s.pulled, s.pattern_mask,
-                 s.points, s.keep, s.scanned_at
+                 s.points, s.keep, s.scanned_at, s.entry_method, s.camera_confidence
             FROM scans s JOIN hunts h ON h.id = s.hunt_id
            WHERE s.user_id = $1 AND (s.scanned_at, s.id) > ($2::timestamptz, $3::uuid)
            ORDER BY s.scanned_at, s.id LIMIT $4`,
@@ -72,6 +72,8 @@ const SOURCES: Record<ExportKind, Source> = {
       points: Number(row.points),
       keep: row.keep,
       date: iso(row.scanned_at),
+      entry_method: row.entry_method,
+      camera_confidence: row.camera_confidence === null ? '' : Number(row.camera_confidence),
     }),
   },
   keepers: {
@@ -109,7 +111,7 @@ const SOURCES: Record<ExportKind, Source> = {
 /** Column order of each CSV file (also the header when a user has no rows of that kind). */
 export const CSV_COLUMNS: Record<ExportKind, string[]> = {
   hunts: ['id', 'title', 'source', 'denomination', 'planned_straps', 'status', 'role', 'started_at', 'closed_at', 'notes_you_logged'],
-  scans: ['id', 'hunt_id', 'hunt', 'strap', 'serial', 'digits', 'star', 'district', 'pulled', 'patterns', 'points', 'keep', 'date'],
+  scans: ['id', 'hunt_id', 'hunt', 'strap', 'serial', 'digits', 'star', 'district', 'pulled', 'patterns', 'points', 'keep', 'date', 'entry_method', 'camera_confidence'],
   keepers: [
     'id', 'serial', 'digits', 'star', 'series', 'district', 'facility', 'denomination', 'grade', 'estimated_value_cents',
     'status', 'note', 'patterns', 'points', 'hunt_id', 'scan_id', 'date', 'photos',

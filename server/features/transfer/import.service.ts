@@ -82,6 +82,8 @@ export class ImportService {
             star: item.row.star ?? undefined,
             pulled: item.row.pulled === true,
             scannedAt: item.scannedAt,
+            entryMethod: item.row.entryMethod ?? undefined,
+            cameraConfidence: item.row.cameraConfidence ?? undefined,
           })),
         )
       : { stored: [], duplicates: [], rejected: [] };

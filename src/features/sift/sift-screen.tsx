@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useMemo, useReducer, useState } from 'react';
+import { lazy, Suspense, useCallback, useEffect, useMemo, useReducer, useRef, useState } from 'react';
 import { ScrollView, StyleSheet, View } from 'react-native';
 import { useFocusEffect } from 'expo-router';
 import { read } from '@shared/engine';
@@ -29,6 +29,17 @@ import { emptyEntry, entryReducer, isComplete, SERIAL_LENGTH } from './serial-en
 import type { TrailNote } from './strap-count';
 import { KEY_HINTS, useHardwareKeys } from './use-hardware-keys';
 import { useSiftSession } from './use-sift-session';
+import type { FrameVerdict } from '@shared/ocr/acceptance';
+import { useCameraSettings } from '../camera/camera-settings';
+import { announceFind } from '../camera/find-feedback';
+import { loggedKey, useLoggedSerials } from '../camera/use-logged-serials';
+
+// The camera, its recogniser and the model load only when the hunter first opens the camera.
+const CameraPanel = lazy(() => import('../camera/camera-panel').then((module) => ({ default: module.CameraPanel })));
+
+/** How the note now in the cells came in: typed, or read by the camera (with its confidence and suffix). */
+type EntrySource = { method: 'keypad' } | { method: 'camera'; confidence: number; suffix: string; unsure: number[]; logged: boolean };
+const TYPED: EntrySource = { method: 'keypad' };
 
 export function SiftScreen() {
   const theme = useTheme();
@@ -41,11 +52,16 @@ export function SiftScreen() {
   const [flash, setFlash] = useState<{ tone: 'ok' | 'error' | 'info'; text: string } | null>(null);
   const [starRunText, setStarRunText] = useState('');
   const starRunSize = entry.star ? parseStarRun(starRunText) : null;
+  const [mode, setMode] = useState<'keypad' | 'camera'>('keypad');
+  const [source, setSource] = useState<EntrySource>(TYPED);
+  const [cameraStatus, setCameraStatus] = useState<string | null>(null);
+  const camera = useCameraSettings();
 
   const [sheetHuntId, setSheetHuntId] = useState<string | null>(null);
   const sheetQuery = useStrapSheet(sheetHuntId);
   const sheetStart = sheetQuery.data ?? (sheetQuery.error && sheetHuntId ? { huntId: sheetHuntId, straps: [] } : undefined);
   const session = useSiftSession(sheetStart);
+  const logged = useLoggedSerials(session.huntId);
   useEffect(() => setSheetHuntId(session.huntId), [session.huntId]);
   const reloadSession = session.reload;
   useFocusEffect(
@@ -70,51 +86,106 @@ export function SiftScreen() {
   const typeDigit = useCallback(
     (digit: string) => {
       if (entry.digits.length === SERIAL_LENGTH - 1) markEighthKey();
+      if (source.method === 'camera' && source.logged) {
+        // The camera already logged what the cells show: a typed digit starts the next note.
+        dispatch({ type: 'clear' });
+        setSource(TYPED);
+      }
       dispatch({ type: 'digit', digit });
     },
-    [entry.digits.length],
+    [entry.digits.length, source],
+  );
+
+  /** The one path for every note, typed or read: the device queue first, then the strap count. */
+  const logEntry = useCallback(
+    async (note: typeof entry, from: EntrySource, runSize: number | null = null) => {
+      const result = read(`${note.prefix}${note.digits}`, {
+        weights,
+        watch,
+        star: note.star,
+        denomination: session.hunt?.denomination,
+        starRunSize: runSize,
+      });
+      if (!result.ok || !queue || !session.count || !session.hunt) return null;
+      const id = uuid();
+      const now = new Date().toISOString();
+      const strap = session.count.strap;
+      const suffix = from.method === 'camera' && !note.star ? from.suffix : '';
+      await queue.add({
+        id,
+        huntId: session.hunt.id,
+        strap,
+        serial: `${note.prefix}${note.digits}${suffix}`,
+        star: result.star,
+        pulled: note.pulled,
+        scannedAt: now,
+        entryMethod: from.method,
+        ...(from.method === 'camera' ? { cameraConfidence: Math.round(from.confidence * 1000) / 1000 } : {}),
+        ...(result.star && runSize !== null ? { starRunSize: runSize } : {}),
+      });
+      await logged.add(loggedKey(note));
+      const completed = await session.log({
+        id,
+        strap,
+        digits: note.digits,
+        prefix: note.prefix,
+        star: result.star,
+        pulled: note.pulled,
+        patterns: result.patterns,
+        points: result.score.points,
+        keep: result.score.keep,
+        loggedAt: now,
+      });
+      setFlash(completed ? { tone: 'ok', text: `Strap ${completed} done: 100 notes searched. Band it; strap ${completed + 1} is next.` } : null);
+      return result;
+    },
+    [weights, watch, queue, session, logged],
   );
 
   const logNote = useCallback(async () => {
-    if (!reading || !reading.ok || !queue || !session.count || !session.hunt) return;
-    const id = uuid();
-    const now = new Date().toISOString();
-    const strap = session.count.strap;
-    await queue.add({
-      id,
-      huntId: session.hunt.id,
-      strap,
-      serial: `${entry.prefix}${entry.digits}`,
-      star: reading.star,
-      pulled: entry.pulled,
-      scannedAt: now,
-      ...(reading.star && starRunSize !== null ? { starRunSize } : {}),
-    });
-    const completed = await session.log({
-      id,
-      strap,
-      digits: entry.digits,
-      prefix: entry.prefix,
-      star: reading.star,
-      pulled: entry.pulled,
-      patterns: reading.patterns,
-      points: reading.score.points,
-      keep: reading.score.keep,
-      loggedAt: now,
-    });
-    dispatch({ type: 'clear' });
+    if (!reading || !reading.ok || (source.method === 'camera' && source.logged)) return;
+    const result = await logEntry(entry, source, starRunSize);
+    if (!result) return;
     setStarRunText('');
-    setFlash(completed ? { tone: 'ok', text: `Strap ${completed} done: 100 notes searched. Band it; strap ${completed + 1} is next.` } : null);
-  }, [reading, queue, session, entry, starRunSize]);
+    if (source.method === 'camera' && result.patterns.length > 0) announceFind(camera.settings);
+    dispatch({ type: 'clear' });
+    setSource(TYPED);
+  }, [reading, entry, source, logEntry, camera.settings, starRunSize]);
+
+  // Verdicts arrive one per frame; a ref keeps the handler current without restarting the camera.
+  const onVerdict = useRef<(verdict: FrameVerdict) => void>(() => undefined);
+  onVerdict.current = (verdict: FrameVerdict) => {
+    if (verdict.kind !== 'accept') return;
+    const { read: seen, unsure } = verdict;
+    const note = { digits: seen.digits, prefix: seen.prefix, star: seen.star, pulled: false };
+    const from: EntrySource = { method: 'camera', confidence: seen.confidence, suffix: seen.suffix, unsure, logged: false };
+    if (logged.has(loggedKey(note))) {
+      setCameraStatus(`${seen.serial} is already logged in this hunt; not logged again.`);
+      return;
+    }
+    setCameraStatus(null);
+    dispatch({ type: 'restore', entry: note });
+    if (!camera.settings.autoLog || unsure.length > 0) {
+      setSource(from);
+      setCameraStatus(unsure.length ? `Check the marked digits, fix them on the keypad if needed, then log.` : `Tap Log to keep ${seen.serial}.`);
+      return;
+    }
+    setSource({ ...from, logged: true });
+    void logEntry(note, from).then((result) => {
+      if (result && result.patterns.length > 0) announceFind(camera.settings);
+    });
+  };
+  const handleVerdict = useCallback((verdict: FrameVerdict) => onVerdict.current(verdict), []);
 
   const undoLast = useCallback(async () => {
     if (!queue) return;
     const removed = await session.undo();
     if (removed) {
       await queue.undo(removed.id);
+      await logged.remove(loggedKey(removed));
       setFlash({ tone: 'info', text: `Took back ${removed.digits} from strap ${removed.strap}.` });
     }
-  }, [queue, session]);
+  }, [queue, session, logged]);
 
   const addToKeepers = useCallback(
     async (note: TrailNote) => {
@@ -168,6 +239,18 @@ export function SiftScreen() {
   const district = entry.prefix ? districtByLetter(entry.prefix[entry.prefix.length - 1]) : null;
   const count = session.count;
 
+  const modeSwitch = (
+    <Button
+      compact
+      kind={mode === 'camera' ? 'primary' : 'secondary'}
+      label={mode === 'camera' ? 'Keypad' : 'Camera'}
+      accessibilityLabel={mode === 'camera' ? 'Switch to the keypad' : 'Read serials with the camera'}
+      onPress={() => setMode(mode === 'camera' ? 'keypad' : 'camera')}
+      testID="mode-switch"
+    />
+  );
+
+  const cameraLogged = source.method === 'camera' && source.logged;
   const header = (
     <View style={styles.header}>
       <View style={styles.headerTop}>
@@ -187,14 +270,24 @@ export function SiftScreen() {
             Finding your place in this hunt…
           </Text>
         )}
-        <Button compact kind="secondary" label="Undo" accessibilityLabel="Undo the last note" onPress={() => void undoLast()} disabled={!count?.trail.length} testID="undo" />
+        <View style={styles.headerActions}>
+          {modeSwitch}
+          <Button compact kind="secondary" label="Undo" accessibilityLabel="Undo the last note" onPress={() => void undoLast()} disabled={!count?.trail.length} testID="undo" />
+        </View>
       </View>
     </View>
   );
 
   const entryArea = (
     <View style={styles.entry}>
-      <DigitCells digits={entry.digits} prefix={entry.prefix} star={entry.star} highlight={misses[0]?.distance === 1 ? misses[0].positions : []} hit={!!reading?.ok && reading.patterns.length > 0} />
+      <DigitCells
+        digits={entry.digits}
+        prefix={entry.prefix}
+        star={entry.star}
+        highlight={misses[0]?.distance === 1 ? misses[0].positions : []}
+        unsure={source.method === 'camera' && !source.logged ? source.unsure : []}
+        hit={!!reading?.ok && reading.patterns.length > 0}
+      />
       <View style={styles.quick}>
         <Field
           label="Prefix"
@@ -214,7 +307,26 @@ export function SiftScreen() {
     </View>
   );
 
-  const keypad = (
+  const cameraArea = (
+    <View style={styles.cameraArea}>
+      <Suspense fallback={<Text tone="muted">Opening the camera…</Text>}>
+        <CameraPanel onVerdict={handleVerdict} onClose={() => setMode('keypad')} status={cameraStatus} />
+      </Suspense>
+      <View style={styles.cameraActions}>
+        <Button
+          label={cameraLogged ? 'Logged' : 'Log'}
+          accessibilityLabel={cameraLogged ? 'This note is logged' : 'Log this note'}
+          onPress={() => void logNote()}
+          disabled={!reading?.ok || !count || cameraLogged}
+          style={styles.cameraLog}
+          testID="camera-log"
+        />
+        <Button kind="secondary" label="Undo" accessibilityLabel="Undo the last note" onPress={() => void undoLast()} disabled={!count?.trail.length} testID="camera-undo" />
+      </View>
+    </View>
+  );
+
+  const keypad = mode === 'camera' ? cameraArea : (
     <Keypad
       onDigit={typeDigit}
       onDelete={() => dispatch({ type: 'delete' })}
@@ -223,7 +335,7 @@ export function SiftScreen() {
       onTogglePulled={() => dispatch({ type: 'toggle-pulled' })}
       star={entry.star}
       pulled={entry.pulled}
-      canLog={!!reading?.ok && !!count}
+      canLog={!!reading?.ok && !!count && !cameraLogged}
       canDelete={entry.digits.length > 0}
       showShortcuts={isWide}
     />
@@ -297,5 +409,9 @@ const styles = StyleSheet.create({
   wideLeft: { width: 440, padding: space.xl, gap: space.lg },
   wideRight: { flex: 1, borderLeftWidth: 1 },
   wideRightContent: { padding: space.xl, gap: space.lg, maxWidth: 760 },
+  headerActions: { flexDirection: 'row', gap: space.sm },
+  cameraArea: { gap: space.sm },
+  cameraActions: { flexDirection: 'row', gap: space.sm },
+  cameraLog: { flex: 1 },
   readingCard: { borderWidth: 1, borderRadius: radius.lg, padding: space.xl, minHeight: 220 },
 });

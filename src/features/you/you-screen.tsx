@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { lazy, Suspense, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { router } from 'expo-router';
 import { Button } from '@/components/ui/button';
@@ -15,11 +15,15 @@ import { useLayout } from '@/theme/use-layout';
 import { space } from '@/theme/tokens';
 import { PASSWORD_RULE } from '@shared/contracts/auth';
 import { deleteMe, updateMe } from './api';
+import { CameraSettingsCard } from '../camera/camera-settings-card';
 import { ArchiveExportCard } from './components/archive-export-card';
 import { ArchiveRestoreCard } from './components/archive-restore-card';
 import { DevicesCard } from './components/devices-card';
 import { ExportCard } from './components/export-card';
-import { ImportCard } from './components/import-card';
+
+// The importer brings papaparse and the log checker (about 9 KB gzipped) that few visits need, so it
+// loads when You is opened rather than with the app (first-load budget, issue 11).
+const ImportCard = lazy(() => import('./components/import-card').then((module) => ({ default: module.ImportCard })));
 
 const THEMES: { value: ThemePreference; label: string }[] = [
   { value: 'system', label: 'Match device' },
@@ -119,10 +123,13 @@ export function YouScreen() {
 
   const data = (
     <>
+      <CameraSettingsCard />
       <ArchiveExportCard />
       <ArchiveRestoreCard />
       <ExportCard />
-      <ImportCard />
+      <Suspense fallback={null}>
+        <ImportCard />
+      </Suspense>
     </>
   );
 

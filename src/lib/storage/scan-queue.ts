@@ -12,6 +12,10 @@ export interface QueuedScan {
   scannedAt: string;
   /** For a star note: the run size the hunter looked up, when they did. */
   starRunSize?: number | null;
+  /** How the serial came in; notes queued before camera mode have neither field (the server reads keypad). */
+  entryMethod?: 'keypad' | 'camera';
+  /** The camera's confidence in the whole serial, 0–1; absent for typed notes. */
+  cameraConfidence?: number;
 }
 
 export interface RejectedScan {

@@ -10,18 +10,20 @@ interface DigitCellsProps {
   star: boolean;
   /** 1-based positions a near miss would change, marked under the cells. */
   highlight?: number[];
+  /** 1-based positions the camera was unsure of: check them, and fix them on the keypad if wrong. */
+  unsure?: number[];
   hit?: boolean;
 }
 
 /** Eight fixed cells, so the eye finds the fifth digit in the same place on every note. */
-export function DigitCells({ digits, prefix, star, highlight = [], hit }: DigitCellsProps) {
+export function DigitCells({ digits, prefix, star, highlight = [], unsure = [], hit }: DigitCellsProps) {
   const theme = useTheme();
   const cells = Array.from({ length: SERIAL_LENGTH }, (_, index) => digits[index] ?? '');
   return (
     <View
       style={styles.row}
       accessibilityRole="text"
-      accessibilityLabel={`Serial ${prefix ? `${prefix} ` : ''}${digits.split('').join(' ') || 'empty'}${star ? ', star note' : ''}`}
+      accessibilityLabel={`Serial ${prefix ? `${prefix} ` : ''}${digits.split('').join(' ') || 'empty'}${star ? ', star note' : ''}${unsure.length ? `; check digit ${unsure.join(', ')}` : ''}`}
       accessibilityLiveRegion="polite"
       testID="digit-cells"
     >
@@ -33,16 +35,18 @@ export function DigitCells({ digits, prefix, star, highlight = [], hit }: DigitC
       {cells.map((digit, index) => {
         const current = index === digits.length;
         const marked = highlight.includes(index + 1);
+        const doubtful = unsure.includes(index + 1);
         return (
           <View
             key={index}
             style={[
               styles.cell,
               {
-                borderColor: current ? theme.brand : marked ? theme.near : theme.line,
+                borderColor: doubtful ? theme.warn : current ? theme.brand : marked ? theme.near : theme.line,
                 backgroundColor: hit && digit ? theme.hitSoft : theme.surfaceRaised,
               },
               current && styles.current,
+              doubtful && styles.doubtful,
               index === 3 && styles.gap,
             ]}
           >
@@ -70,6 +74,7 @@ const styles = StyleSheet.create({
     justifyContent: 'center',
   },
   current: { borderWidth: 2.5 },
+  doubtful: { borderWidth: 3, borderStyle: 'dashed' },
   gap: { marginRight: 6 },
   digit: { fontFamily: fonts.monoMedium, fontSize: 30, fontVariant: ['tabular-nums'] },
   mark: { position: 'absolute', bottom: 4, width: 12, height: 3, borderRadius: 2 },

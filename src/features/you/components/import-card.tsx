@@ -27,6 +27,8 @@ const FIELD_LABEL: Record<ImportField, string> = {
   star: 'Star',
   pulled: 'Pulled',
   note: 'Note',
+  entryMethod: 'Entered by (keypad or camera)',
+  cameraConfidence: 'Camera confidence',
 };
 const count = (n: number) => n.toLocaleString('en-US');
 const flags = (row: CheckedRow) => [row.row?.star ? '★ star' : null, row.row?.pulled ? 'pulled' : null].filter(Boolean).join(' · ');
