@@ -33,6 +33,8 @@ for db in "${P}_test" "${P}_migrations" "${P}_e2e"; do recreate_database "$db"; 
 export NODE_ENV=test LOG_LEVEL="${LOG_LEVEL:-silent}"
 export TEST_DATABASE_URL="$(database_url "${P}_test")"
 export MIGRATIONS_DATABASE_URL="$(database_url "${P}_migrations")"
+# Tests that make scratch databases (backups, account round trips) need the superuser; the app never does.
+export PG_ADMIN_URL="$(admin_database_url postgres)"
 DATABASE_URL="$TEST_DATABASE_URL" run_migrations
 
 # The local stand-ins for S3 and SMTP, on their own ports so a running `npm start` is left alone.

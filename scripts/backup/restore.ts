@@ -10,19 +10,24 @@ import { MANIFEST, OBJECTS, type BackupManifest } from './manifest';
 import { withConnection } from './plain-connection';
 import { runTool } from './pg-tools';
 
-/** The maintenance database beside the target: databases are created and dropped from there. */
-function adminUrl(databaseUrl: string): { url: string; name: string } {
+/**
+ * The maintenance database beside the target: databases are created and dropped from there, as the
+ * superuser (PG_ADMIN_URL) when given, because the app's own role may not create databases.
+ */
+function adminUrl(databaseUrl: string): { url: string; name: string; owner: string } {
   const url = new URL(databaseUrl);
   const name = decodeURIComponent(url.pathname.slice(1));
+  const owner = decodeURIComponent(url.username);
+  if (process.env.PG_ADMIN_URL) return { url: process.env.PG_ADMIN_URL, name, owner };
   url.pathname = '/postgres';
-  return { url: url.toString(), name };
+  return { url: url.toString(), name, owner };
 }
 
 const quote = (name: string) => `"${name.replace(/"/g, '""')}"`;
 
 /** Makes sure the target database exists and is empty; a database with tables is only replaced with --force. */
 async function freshDatabase(databaseUrl: string, force: boolean): Promise<string> {
-  const { url, name } = adminUrl(databaseUrl);
+  const { url, name, owner } = adminUrl(databaseUrl);
   return withConnection(url, async (admin) => {
     const exists = (await admin(`SELECT 1 FROM pg_database WHERE datname = $1`, [name])).length === 1;
     if (exists) {
@@ -34,7 +39,8 @@ async function freshDatabase(databaseUrl: string, force: boolean): Promise<strin
       if (tables === 0) return name;
       await admin(`DROP DATABASE ${quote(name)} WITH (FORCE)`);
     }
-    await admin(`CREATE DATABASE ${quote(name)}`);
+    // Owned by the role that restores into it and then runs the app, so it may create the tables.
+    await admin(owner ? `CREATE DATABASE ${quote(name)} OWNER ${quote(owner)}` : `CREATE DATABASE ${quote(name)}`);
     return name;
   });
 }

@@ -16,6 +16,8 @@ ensure_postgres
 export PG_BIN
 DB_NAME="${DB_NAME:-strapsift}"
 export DATABASE_URL="${DATABASE_URL:-$(database_url "$DB_NAME")}"
+# The app's role may not create databases; restore makes its fresh one as the superuser.
+export PG_ADMIN_URL="${PG_ADMIN_URL:-$(admin_database_url postgres)}"
 export S3_PORT="${S3_PORT:-4569}"
 if [ -z "${S3_ENDPOINT:-}" ]; then
   export S3_ENDPOINT="http://127.0.0.1:$S3_PORT"

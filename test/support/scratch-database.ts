@@ -8,7 +8,9 @@ export function scratchDatabaseUrl(suffix: string): string {
   return url.toString();
 }
 
+// The app's own role may not create databases (issue 13), so the test script hands over the superuser's URL.
 function adminUrl(): string {
+  if (process.env.PG_ADMIN_URL) return process.env.PG_ADMIN_URL;
   const url = new URL(testDatabaseUrl());
   url.pathname = '/postgres';
   return url.toString();
@@ -24,6 +26,8 @@ export async function dropDatabase(url: string): Promise<void> {
 export async function freshDatabase(suffix: string): Promise<string> {
   const url = scratchDatabaseUrl(suffix);
   await dropDatabase(url);
-  await withConnection(adminUrl(), (query) => query(`CREATE DATABASE "${nameOf(url)}"`));
+  // Owned by the test's own role, which may then create the tables (the public schema follows the owner).
+  const owner = decodeURIComponent(new URL(url).username);
+  await withConnection(adminUrl(), (query) => query(owner ? `CREATE DATABASE "${nameOf(url)}" OWNER "${owner}"` : `CREATE DATABASE "${nameOf(url)}"`));
   return url;
 }
