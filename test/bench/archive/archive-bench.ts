@@ -253,7 +253,11 @@ async function main(): Promise<void> {
   }
 }
 
-main().catch((error: unknown) => {
-  console.error('archive bench failed:', error);
-  process.exitCode = 1;
-});
+// Exit outright: a failure part-way leaves the app's server listening, which would keep the process alive.
+main().then(
+  () => process.exit(0),
+  (error: unknown) => {
+    console.error('archive bench failed:', error);
+    process.exit(1);
+  },
+);
