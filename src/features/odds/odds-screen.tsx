@@ -4,6 +4,7 @@ import { DEFAULT_WEIGHTS, SCORE_EXPLANATION, type WeightTable } from '@shared/en
 import type { WeightTableView } from '@shared/contracts';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
+import { ChoiceRow } from '@/components/ui/choice-row';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
@@ -18,6 +19,13 @@ import { WatchList } from './components/watch-list';
 import { WeightEditor } from './components/weight-editor';
 import { draftToTable, tableToDraft, type WeightDraft } from './weight-draft';
 
+// Circulating notes stop at their run end (TRADE.md; run sizes are common practice among hunters).
+const DOMAINS = [
+  { value: 99_999_999, label: 'Every serial' },
+  { value: 96_000_000, label: '$1–$20 notes (to 96,000,000)' },
+  { value: 99_200_000, label: '$50, $100 (to 99,200,000)' },
+] as const;
+
 export function OddsScreen() {
   const { isWide } = useLayout();
   const tables = useWeightTables();
@@ -30,6 +38,7 @@ export function OddsScreen() {
   const [name, setName] = useState('');
   const [draft, setDraft] = useState<WeightDraft>(tableToDraft(DEFAULT_WEIGHTS));
   const [newName, setNewName] = useState('');
+  const [domainLast, setDomainLast] = useState<number>(99_999_999);
   const [saved, setSaved] = useState<string | null>(null);
 
   useEffect(() => {
@@ -148,7 +157,8 @@ export function OddsScreen() {
       <Text variant="label" tone="muted">
         THE RARITY TABLE
       </Text>
-      <RarityTable lowLimit={draft.lowLimit} weightOf={weightOf} />
+      <ChoiceRow label="Serials counted" options={DOMAINS} value={domainLast} onChange={(value) => setDomainLast(Number(value))} testID="odds-domain" />
+      <RarityTable lowLimit={draft.lowLimit} weightOf={weightOf} domainLast={domainLast} />
     </Card>
   );
 

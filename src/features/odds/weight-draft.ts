@@ -11,6 +11,8 @@ export interface WeightDraft {
   counts: Record<'4' | '5' | '6' | '7' | '8', string>;
   lowLimit: LowLimit;
   starBonus: string;
+  /** On top of the star bonus, for a star note whose recorded run is 640,000 or fewer. */
+  smallStarRunBonus: string;
   watchBonus: string;
   keepThreshold: string;
 }
@@ -27,6 +29,7 @@ export function tableToDraft(table: WeightTableValues): WeightDraft {
     counts: Object.fromEntries(COUNT_TIMES.map((n) => [n, text(table.counts[Number(n) as 4])])) as WeightDraft['counts'],
     lowLimit: table.lowLimit as LowLimit,
     starBonus: text(table.starBonus),
+    smallStarRunBonus: text(table.smallStarRunBonus),
     watchBonus: text(table.watchBonus),
     keepThreshold: text(table.keepThreshold),
   };
@@ -51,6 +54,7 @@ export function draftToTable(draft: WeightDraft): DraftResult {
     counts,
     lowLimit: draft.lowLimit,
     starBonus: toNumber(draft.starBonus) ?? 0,
+    smallStarRunBonus: toNumber(draft.smallStarRunBonus) ?? 0,
     watchBonus: toNumber(draft.watchBonus) ?? 0,
     keepThreshold: toNumber(draft.keepThreshold) ?? 0,
   };

@@ -23,11 +23,20 @@ const fmt = (n: number) => n.toLocaleString('en-US');
  * Every pattern with its exact count over 00000001–99999999, "1 in N", rarity points log10(1/p),
  * and the hunter's own weight beside it, so rarity and worth can be compared in one glance.
  */
-export function RarityTable({ lowLimit, weightOf }: { lowLimit: LowLimit; weightOf(key: string): number | undefined }) {
+export function RarityTable({
+  lowLimit,
+  weightOf,
+  domainLast = 99_999_999,
+}: {
+  lowLimit: LowLimit;
+  weightOf(key: string): number | undefined;
+  /** Last serial counted: 99,999,999, or a run end (96,000,000 for $1–$20, 99,200,000 for $50 and $100). */
+  domainLast?: number;
+}) {
   const theme = useTheme();
   const { isWide } = useLayout();
   const rows = useMemo<Row[]>(() => {
-    const patterns = oddsTable({ lowLimit }).map((odds) => ({
+    const patterns = oddsTable({ lowLimit, domainLast }).map((odds) => ({
       key: odds.id,
       name: PATTERN_NAMES[odds.id as PatternId],
       definition: odds.id === 'low' ? `serial ≤ ${fmt(lowLimit)} (your low limit)` : PATTERN_DEFINITIONS[odds.id as PatternId],
@@ -45,7 +54,8 @@ export function RarityTable({ lowLimit, weightOf }: { lowLimit: LowLimit; weight
       return { key: `count-${times}`, name: `${times}+ of a digit`, definition: `one digit ${times} or more times anywhere`, ...odds, weight: weightOf(`counts.${times}`) };
     });
     return [...patterns, ...runs, ...counts].sort((a, b) => a.count - b.count);
-  }, [lowLimit, weightOf]);
+  }, [lowLimit, weightOf, domainLast]);
+  const full = domainLast === 99_999_999;
 
   return (
     <View role="table" accessibilityLabel="Rarity of every pattern" testID="rarity-table">
@@ -79,12 +89,15 @@ export function RarityTable({ lowLimit, weightOf }: { lowLimit: LowLimit; weight
           </View>
           <Text style={[styles.num, styles.mono]}>{fmt(row.count)}</Text>
           {isWide ? <Text style={[styles.num, styles.mono]}>{oneInText(row.oneIn).replace('1 in ', '')}</Text> : null}
-          <Text style={[styles.small, styles.mono]}>{row.points.toFixed(2)}</Text>
+          <Text style={[styles.small, styles.mono]}>{Number.isFinite(row.points) ? row.points.toFixed(2) : '—'}</Text>
           <Text style={[styles.small, styles.mono, { color: row.weight ? theme.hit : theme.inkFaint }]}>{row.weight ?? '–'}</Text>
         </View>
       ))}
       <Text variant="caption" tone="faint" style={styles.foot}>
-        Counts are exact over the 99,999,999 serials 00000001–99999999 (worked out by counting, not sampling). Rarity is log10 of 1 in N: each point is ten times rarer.
+        {full
+          ? 'Counts are exact over the 99,999,999 serials 00000001–99999999 (worked out by counting, not sampling).'
+          : `Pattern counts are exact over the ${fmt(domainLast)} serials 00000001–${String(domainLast).padStart(8, '0')}, where circulating notes stop in a block (run ends: common practice among hunters); run and count rows stay over 00000001–99999999.`}{' '}
+        Rarity is log10 of 1 in N: each point is ten times rarer. Many sellers call only true binaries (0s and 1s) “binary”; here binary is any two digits, and true binary is shown on its own row.
       </Text>
     </View>
   );

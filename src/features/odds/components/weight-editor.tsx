@@ -54,6 +54,12 @@ export function WeightEditor({ draft, onChange, errors }: WeightEditorProps) {
       />
       <View style={styles.grid}>
         <NumberCell label="star bonus" value={draft.starBonus} error={errors.starBonus} onChange={(text) => onChange({ ...draft, starBonus: text })} />
+        <NumberCell
+          label="small star run"
+          value={draft.smallStarRunBonus}
+          error={errors.smallStarRunBonus}
+          onChange={(text) => onChange({ ...draft, smallStarRunBonus: text })}
+        />
         <NumberCell label="watch bonus" value={draft.watchBonus} error={errors.watchBonus} onChange={(text) => onChange({ ...draft, watchBonus: text })} />
         <NumberCell label="keep at ≥" value={draft.keepThreshold} error={errors.keepThreshold} onChange={(text) => onChange({ ...draft, keepThreshold: text })} />
       </View>
