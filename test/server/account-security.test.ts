@@ -1,20 +1,9 @@
 import argon2 from 'argon2';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { MailMessage, Mailer } from '../../server/lib/mail';
 import { authResponse, deviceSessionList, undoEmailResponse } from '../../shared/contracts/auth';
 import { clientAddress, openTestApi, registerUser, type TestApi } from '../support/api';
-
-/** Keeps every mail the app sends, so a test can read the undo link. */
-class MemoryMailer implements Mailer {
-  readonly sent: MailMessage[] = [];
-  async send(message: MailMessage): Promise<void> {
-    this.sent.push(message);
-  }
-  to(address: string) {
-    return this.sent.filter((mail) => mail.to === address);
-  }
-}
+import { MemoryMailer } from '../support/mail';
 
 let api: TestApi;
 const mailer = new MemoryMailer();
