@@ -231,6 +231,8 @@ describe('per-user quotas', () => {
       expect(over.status).toBe(429);
       expect(Number(over.headers['retry-after'])).toBeGreaterThan(0);
       expect(over.body.error.message).toMatch(/notes in a day/);
+      // Nothing of the refused batch was stored.
+      expect((await tight.dataSource.query(`SELECT count(*)::int AS n FROM scans WHERE hunt_id = $1`, [hunt.id]))[0].n).toBe(5);
     } finally {
       await tight.close();
     }
