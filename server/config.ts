@@ -104,6 +104,7 @@ function developmentSecret(file: string): string {
   return secret;
 }
 
+// Per process by design: read from the environment, the same in every process.
 let cached: Config | undefined;
 
 export function config(): Config {

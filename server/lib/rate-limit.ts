@@ -70,10 +70,11 @@ export class Limit {
     }
   }
 
-  /** Throws a 429 if the key has already used its points, without spending one. */
-  async check(key: string, message: string): Promise<void> {
+  /** Throws a 429 if the key has already used its points, without spending one; answers the points used so far. */
+  async check(key: string, message: string): Promise<number> {
     const state = await this.store().get(key);
     if (state && state.consumedPoints >= this.rule.points) throw tooManyRequests(message, state.msBeforeNext / 1000);
+    return state?.consumedPoints ?? 0;
   }
 
   /** Counts a hit that may go over the limit without refusing this request (the refusal comes with the next). */

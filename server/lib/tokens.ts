@@ -2,7 +2,8 @@ import { createSecretKey, type KeyObject } from 'node:crypto';
 import jwt from 'jsonwebtoken';
 import { config } from '../config';
 
-// One key object for the life of the process: jsonwebtoken would otherwise build one on every check.
+// One key object for the life of the process (per process by design: derived from JWT_SECRET, which every
+// process shares); jsonwebtoken would otherwise build one on every check.
 let key: { secret: string; object: KeyObject } | null = null;
 function signingKey(): KeyObject {
   const secret = config().JWT_SECRET;

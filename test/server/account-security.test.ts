@@ -1,20 +1,9 @@
 import argon2 from 'argon2';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { MailMessage, Mailer } from '../../server/lib/mail';
 import { authResponse, deviceSessionList, undoEmailResponse } from '../../shared/contracts/auth';
 import { clientAddress, openTestApi, registerUser, type TestApi } from '../support/api';
-
-/** Keeps every mail the app sends, so a test can read the undo link. */
-class MemoryMailer implements Mailer {
-  readonly sent: MailMessage[] = [];
-  async send(message: MailMessage): Promise<void> {
-    this.sent.push(message);
-  }
-  to(address: string) {
-    return this.sent.filter((mail) => mail.to === address);
-  }
-}
+import { MemoryMailer } from '../support/mail';
 
 let api: TestApi;
 const mailer = new MemoryMailer();
@@ -85,6 +74,8 @@ describe('refresh tokens rotate, and a reused one ends the sign-in', () => {
   it('when an old refresh token is presented again (a copy), then the whole sign-in ends, the newest tokens too', async () => {
     const user = await registerUser(api.app, 'reuse');
     const rotated = authResponse.parse((await request(api.app).post('/api/auth/refresh').send({ refreshToken: user.session.refreshToken })).body);
+    // Past the 30-second grace that lets two tabs refresh at once.
+    await api.dataSource.query(`UPDATE auth_sessions SET rotated_at = now() - interval '1 minute' WHERE user_id = $1`, [user.id]);
 
     const replay = await request(api.app).post('/api/auth/refresh').send({ refreshToken: user.session.refreshToken });
 
@@ -94,6 +85,16 @@ describe('refresh tokens rotate, and a reused one ends the sign-in', () => {
     expect((await request(api.app).get('/api/me').set('Authorization', `Bearer ${rotated.token}`)).status).toBe(401);
     const [row] = await api.dataSource.query(`SELECT end_reason FROM auth_sessions WHERE user_id = $1`, [user.id]);
     expect(row.end_reason).toBe('reuse');
+  });
+
+  it('when two tabs refresh with the same token at the same moment, then both get through; a third use of it ends the sign-in', async () => {
+    const user = await registerUser(api.app, 'two-tabs');
+    const [first, second] = await Promise.all([
+      request(api.app).post('/api/auth/refresh').send({ refreshToken: user.session.refreshToken }),
+      request(api.app).post('/api/auth/refresh').send({ refreshToken: user.session.refreshToken }),
+    ]);
+    expect([first.status, second.status]).toEqual([200, 200]);
+    expect((await request(api.app).post('/api/auth/refresh').send({ refreshToken: user.session.refreshToken })).status).toBe(401);
   });
 
   it('when the device signs out, then its access and refresh tokens are dead for good', async () => {

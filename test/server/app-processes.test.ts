@@ -141,6 +141,10 @@ describe('two app processes on two ports, one database', () => {
     const hunt = (await call(b.baseUrl, 'POST', '/hunts', { title: 'Split box', source: 'Larkspur Valley CU', denomination: 1, plannedStraps: 2 }, session.token)).body;
     // A refresh on one process is a rotation for both: the old refresh token is dead on the other.
     const rotated = (await call(b.baseUrl, 'POST', '/auth/refresh', { refreshToken: session.refreshToken })).body;
+    const dataSource = await openTestDataSource();
+    // Past the 30-second grace for simultaneous refreshes.
+    await dataSource.query(`UPDATE auth_sessions SET rotated_at = now() - interval '1 minute' WHERE id = $1`, [rotated.refreshToken.split('.')[0]]);
+    await dataSource.destroy();
     expect((await call(a.baseUrl, 'POST', '/auth/refresh', { refreshToken: session.refreshToken })).status).toBe(401);
     expect((await call(a.baseUrl, 'GET', '/me', undefined, rotated.token)).status).toBe(401);
 

@@ -4,18 +4,11 @@ import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { KeepersService } from '../../server/features/keepers/keepers.service';
 import { PHOTO_QUOTA } from '../../server/features/photos/photos.service';
 import { encodeCursor } from '../../server/lib/cursor';
-import type { MailMessage, Mailer } from '../../server/lib/mail';
 import { oneLine } from '../../server/lib/mail';
 import { DEFAULT_LIMITS } from '../../server/lib/rate-limit';
 import { createHunt, openTestApi, postBatch, registerAdmin, registerUser, scanOf, type TestApi, type TestUser } from '../support/api';
 import { drawPng } from '../support/images';
-
-class MemoryMailer implements Mailer {
-  readonly sent: MailMessage[] = [];
-  async send(message: MailMessage): Promise<void> {
-    this.sent.push(message);
-  }
-}
+import { MemoryMailer } from '../support/mail';
 
 let api: TestApi;
 let owner: TestUser;
@@ -238,6 +231,8 @@ describe('per-user quotas', () => {
       expect(over.status).toBe(429);
       expect(Number(over.headers['retry-after'])).toBeGreaterThan(0);
       expect(over.body.error.message).toMatch(/notes in a day/);
+      // Nothing of the refused batch was stored.
+      expect((await tight.dataSource.query(`SELECT count(*)::int AS n FROM scans WHERE hunt_id = $1`, [hunt.id]))[0].n).toBe(5);
     } finally {
       await tight.close();
     }

@@ -1,6 +1,7 @@
 import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { simpleParser, type ParsedMail } from 'mailparser';
+import type { MailMessage, Mailer } from '../../server/lib/mail';
 
 /** The folder of .eml files the test script's mail catcher writes (scripts/fakes/mail-catcher.ts). */
 export function mailDir(): string {
@@ -49,4 +50,15 @@ export async function mailsTo(address: string): Promise<ParsedMail[]> {
     if (recipients(mail).includes(wanted)) found.push(mail);
   }
   return found;
+}
+
+/** Keeps every mail an app sends in memory, for tests that read a link without the mail catcher. */
+export class MemoryMailer implements Mailer {
+  readonly sent: MailMessage[] = [];
+  async send(message: MailMessage): Promise<void> {
+    this.sent.push(message);
+  }
+  to(address: string): MailMessage[] {
+    return this.sent.filter((mail) => mail.to === address);
+  }
 }

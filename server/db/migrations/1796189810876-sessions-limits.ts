@@ -22,6 +22,8 @@ export class SessionsLimits1796189810876 implements MigrationInterface {
                 "id" uuid NOT NULL DEFAULT gen_random_uuid(),
                 "user_id" uuid NOT NULL,
                 "token_hash" character varying(64) NOT NULL,
+                "previous_hash" character varying(64),
+                "rotated_at" TIMESTAMP WITH TIME ZONE,
                 "device" character varying(80) NOT NULL,
                 "created_at" TIMESTAMP WITH TIME ZONE NOT NULL DEFAULT now(),
                 "last_used_at" TIMESTAMP WITH TIME ZONE NOT NULL,

@@ -23,6 +23,13 @@ export class AuthSessionEntity {
   @Column({ name: 'token_hash', type: 'varchar', length: 64 })
   tokenHash: string;
 
+  /** The secret this one replaced, and when: two tabs refreshing at once both present it (see rotate). */
+  @Column({ name: 'previous_hash', type: 'varchar', length: 64, nullable: true })
+  previousHash: string | null;
+
+  @Column({ name: 'rotated_at', type: 'timestamptz', nullable: true })
+  rotatedAt: Date | null;
+
   /** A short label from the User-Agent ("Chrome on Android"), so the owner can tell devices apart. */
   @Column({ type: 'varchar', length: 80 })
   device: string;

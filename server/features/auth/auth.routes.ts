@@ -34,10 +34,10 @@ export function authRoutes(
       // Failures count per client and account together: a stranger elsewhere cannot lock the owner out.
       const pair = `${clientAddress(req)}|${body.email}`;
       const wait = 'Too many failed sign-ins for this e-mail from here; wait a while before trying again';
-      await limits.signInFailures.check(pair, wait);
+      const failedBefore = await limits.signInFailures.check(pair, wait);
       try {
         const session = await auth.login(body, clientOf(req));
-        await limits.signInFailures.clear(pair);
+        if (failedBefore > 0) await limits.signInFailures.clear(pair);
         res.json(session);
       } catch (error) {
         if (error instanceof HttpError && error.status === 401) await limits.signInFailures.penalise(pair);

@@ -4,7 +4,8 @@ import { HttpError } from '../../lib/errors';
 export const PASSWORD_MIN_LENGTH = 10;
 
 // zxcvbn-ts ships its list of ~49,000 leaked passwords inside the package, so no check goes over the
-// network. Only entries long enough to pass the length rule can matter; they are kept, lower-cased.
+// network. Only entries long enough to pass the length rule can matter; they are kept, lower-cased, once
+// per process by design (the list is part of the code).
 let common: Set<string> | undefined;
 function commonPasswords(): Set<string> {
   common ??= new Set(

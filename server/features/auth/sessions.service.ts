@@ -6,6 +6,8 @@ import { AuthSessionEntity, type SessionEndReason } from './auth-session.entity'
 import { deviceLabel } from './device-label';
 
 export const REFRESH_TOKEN_DAYS = 30;
+/** How long the secret just replaced is still accepted once (simultaneous refreshes from two tabs). */
+export const REUSE_GRACE_SECONDS = 30;
 
 const ENDED = 'Your session has ended; sign in again';
 
@@ -48,29 +50,39 @@ export class SessionsService {
     return { sessionId: session.id, refreshToken: `${session.id}.${secret}` };
   }
 
-  /** Spends a refresh token: a new one for the same sign-in, or a 401 (and the sign-in ended on reuse). */
+  /**
+   * Spends a refresh token: a new one for the same sign-in, or a 401 (and the sign-in ended on reuse).
+   * The secret replaced less than REUSE_GRACE_SECONDS ago is still taken once more, because two tabs of the
+   * web app share one stored session and refresh at the same moment; older secrets mean a copy.
+   */
   async rotate(refreshToken: string): Promise<{ userId: string } & StartedSession> {
     const parts = splitToken(refreshToken);
     if (!parts) throw unauthorized(ENDED);
+    const presented = hashSecretToken(parts.secret);
     const secret = newSecretToken();
-    return this.dataSource.transaction(async (manager) => {
+    const rotated = await this.dataSource.transaction(async (manager) => {
       const [row] = (await manager.query(
-        `SELECT user_id, token_hash, ended_at, expires_at FROM auth_sessions WHERE id = $1 FOR UPDATE`,
-        [parts.id],
-      )) as Array<{ user_id: string; token_hash: string; ended_at: Date | null; expires_at: Date }>;
+        `SELECT user_id, token_hash, previous_hash, rotated_at > now() - make_interval(secs => $2) AS in_grace, ended_at, expires_at
+           FROM auth_sessions WHERE id = $1 FOR UPDATE`,
+        [parts.id, REUSE_GRACE_SECONDS],
+      )) as Array<{ user_id: string; token_hash: string; previous_hash: string | null; in_grace: boolean | null; ended_at: Date | null; expires_at: Date }>;
       if (!row || row.ended_at || row.expires_at.getTime() <= Date.now()) throw unauthorized(ENDED);
-      if (row.token_hash !== hashSecretToken(parts.secret)) {
+      const current = row.token_hash === presented;
+      const racing = !current && row.previous_hash === presented && row.in_grace === true;
+      if (!current && !racing) {
         // Only one holder can have the newest secret; an older one means a copy is in someone else's hands.
         await manager.query(`UPDATE auth_sessions SET ended_at = now(), end_reason = 'reuse' WHERE id = $1`, [parts.id]);
         return null;
       }
-      await manager.query(`UPDATE auth_sessions SET token_hash = $2, last_used_at = now() WHERE id = $1`, [parts.id, hashSecretToken(secret)]);
+      await manager.query(
+        `UPDATE auth_sessions SET previous_hash = token_hash, token_hash = $2, rotated_at = now(), last_used_at = now() WHERE id = $1`,
+        [parts.id, hashSecretToken(secret)],
+      );
       return { userId: row.user_id, sessionId: parts.id, refreshToken: `${parts.id}.${secret}` };
-    }).then((rotated) => {
-      // Thrown after the commit, so the reuse mark stays.
-      if (!rotated) throw unauthorized('This sign-in was ended because its refresh token was used twice; sign in again');
-      return rotated;
     });
+    // Thrown after the commit, so the reuse mark stays.
+    if (!rotated) throw unauthorized('This sign-in was ended because its refresh token was used twice; sign in again');
+    return rotated;
   }
 
   async end(userId: string, sessionId: string, reason: SessionEndReason): Promise<void> {

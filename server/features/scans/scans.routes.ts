@@ -17,11 +17,15 @@ export function scansRoutes(scans: ScansService, requireAuth: RequestHandler, li
       // service, so a single bad note is rejected on its own instead of failing the batch.
       const { scans: items } = parse(scanBatchEnvelope, req.body);
       const userId = currentUser(req).id;
-      // Notes a day per account (shared by every app process): generous, but a runaway script stops.
-      await limits.scansPerDay.check(userId, `This account has logged ${limits.scansPerDay.rule.points.toLocaleString('en-US')} notes in a day, the most it takes; the rest stay queued on your device and go up later`);
-      const answer = await scans.storeBatch(userId, items);
-      if (answer.stored.length) await limits.scansPerDay.penalise(userId, answer.stored.length);
-      res.json(answer);
+      // Notes sent a day per account (shared by every app process): generous, but a runaway script stops.
+      // Counted as sent, in one round trip before the insert; a retried batch counts again, which the
+      // allowance's margin absorbs.
+      await limits.scansPerDay.consume(
+        userId,
+        `This account has sent ${limits.scansPerDay.rule.points.toLocaleString('en-US')} notes in a day, the most it takes; the rest stay queued on your device and go up later`,
+        items.length,
+      );
+      res.json(await scans.storeBatch(userId, items));
     }),
   );
   router.delete(
