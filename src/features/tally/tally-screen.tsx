@@ -132,15 +132,11 @@ export function TallyScreen() {
       ) : data ? (
         <>
           <StatRow>
-            <Stat
-              label="Notes searched"
-              value={formatCount(data.notes)}
-              hint={`${formatCount(data.entered.keypad)} typed · ${formatCount(data.entered.camera)} by camera`}
-              testID="tally-notes"
-            />
+            <Stat label="Notes searched" value={formatCount(data.notes)} testID="tally-notes" />
             <Stat label="Hits" value={formatCount(data.hits)} tone={data.hits ? 'hit' : 'ink'} />
             <Stat label="Per 1,000 notes" value={formatRate(data.perThousand)} testID="tally-rate" />
             <Stat label="Pulled" value={formatCount(data.pulled)} hint={`${formatCount(data.keeps)} scored as keepers`} />
+            <Stat label="Read by camera" value={formatCount(data.entered.camera)} hint={`${formatCount(data.entered.keypad)} typed on the keypad`} testID="tally-entry" />
           </StatRow>
           <Section
             title="Per pattern, against chance"

@@ -1,3 +1,9 @@
+/**
+ * The fake-camera strap without a browser: tsx test/camera/cards/try-strap.ts
+ * Each card of the browser test's strap is shown for 8 jittered, noisy frames, read with the camera's own
+ * variant rotation and acceptance rule, and every card that is not accepted exactly once, correctly, is
+ * printed with what was accepted. Useful when tuning; the browser test is the measure.
+ */
 import { acceptFrame, initialAcceptance } from '../../../shared/ocr/acceptance';
 import { greyFromPixels, crop } from '../../../src/lib/ocr/grey-image';
 import { createNodeEngine } from '../../../src/lib/ocr/node-engine';
@@ -7,7 +13,7 @@ import { BAND } from '../../../src/features/camera/band';
 import { cardSpecs, expectedSerial, seeded } from './card-specs';
 import { DEFAULT_VIDEO, frameWithCard } from './card-video';
 import { drawCard } from './draw-card';
-(async () => {
+async function main() {
   const cards = cardSpecs('clean', 100, 31337);
   const engine = await createNodeEngine();
   const o = DEFAULT_VIDEO;
@@ -34,4 +40,6 @@ import { drawCard } from './draw-card';
   }
   console.log('good', good);
   await engine.close();
-})();
+}
+
+void main();
