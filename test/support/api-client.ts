@@ -18,3 +18,16 @@ export async function apiAs(email: string, password: string) {
     return { status: response.status, body: (text ? JSON.parse(text) : null) as T };
   };
 }
+
+/** A brand-new collector registered through the served app's API, as a first visit would make one. */
+export async function newCollector(label: string): Promise<{ email: string; password: string }> {
+  const email = `${label}-${Math.random().toString(36).slice(2, 10)}@strapsift.test`;
+  const password = 'new-hunter-pass-1';
+  const registered = await fetch(`${baseUrl()}/api/auth/register`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify({ email, password, displayName: 'New Hunter' }),
+  });
+  if (registered.status !== 201) throw new Error(`registering ${email} failed: ${registered.status}`);
+  return { email, password };
+}
