@@ -188,7 +188,7 @@ export class KeepersService {
         [request.scanId, userId],
       );
       const scan = rows[0];
-      if (!scan) throw notFound('No such scan');
+      if (!scan) throw notFound('No such note');
       const existing = await this.keepers().findOne({ where: { userId, scanId: request.scanId } });
       if (existing) return { keeper: await this.get(userId, existing.id), created: false };
       base = {

@@ -210,9 +210,9 @@ export class ScansService {
   async remove(userId: string, scanId: string): Promise<void> {
     const rows: Array<{ hunt_id: string; user_id: string }> = await this.dataSource.query(`SELECT hunt_id, user_id FROM scans WHERE id = $1`, [scanId]);
     const scan = rows[0];
-    if (!scan) throw notFound('No such scan');
+    if (!scan) throw notFound('No such note');
     const access = await huntAccess(this.dataSource, scan.hunt_id, userId).catch((error: unknown) => {
-      throw error instanceof HttpError && error.status === 404 ? notFound('No such scan') : error;
+      throw error instanceof HttpError && error.status === 404 ? notFound('No such note') : error;
     });
     if (scan.user_id !== userId && access.role !== 'owner') {
       throw forbidden('Only the one who logged this note or the hunt’s owner may delete it');

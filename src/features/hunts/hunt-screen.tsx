@@ -17,7 +17,7 @@ import { useLayout } from '@/theme/use-layout';
 import { radius, space } from '@/theme/tokens';
 import { useSiftSession } from '../sift/use-sift-session';
 import { ChanceSection } from '../tally/components/chance-section';
-import { formatCount, formatDate, formatRate } from '../tally/format';
+import { caption, formatCount, formatDate, formatRate } from '@/lib/format';
 import {
   addMember,
   closeHunt,
@@ -130,13 +130,13 @@ function HitsSection({ hunt, wide, crew }: { hunt: HuntDetail; wide: boolean; cr
   const more = !!pages[pages.length - 1]?.nextCursor;
   const busy = scans.isValidating && pages.length < scans.size;
   return (
-    <Section title={`Hits${scans.data ? ` · ${hits.length}${more ? '+' : ''}` : ''}`} testID="hits-section">
+    <Section title={`Finds${scans.data ? ` · ${hits.length}${more ? '+' : ''}` : ''}`} testID="hits-section">
       {scans.error && !scans.data ? (
-        <LoadError what="hits" error={scans.error} retry={() => void scans.mutate()} />
+        <LoadError what="finds" error={scans.error} retry={() => void scans.mutate()} />
       ) : !scans.data ? (
-        <Loading what="hits" />
+        <Loading what="finds" />
       ) : hits.length === 0 && !more ? (
-        <Text tone="muted">No hits among the {formatCount(read)} notes logged{read ? '' : ' yet'}.</Text>
+        <Text tone="muted">No finds among the {formatCount(read)} notes logged{read ? '' : ' yet'}.</Text>
       ) : (
         <HitsTable hits={hits} wide={wide} showLoggedBy={crew} />
       )}
@@ -249,7 +249,7 @@ function ManageBlock({ hunt }: { hunt: HuntDetail }) {
         title={asking === 'close' ? `Close ${hunt.title}?` : `Delete ${hunt.title}?`}
         message={
           asking === 'close'
-            ? 'Nobody can log notes into it after this, crew included. The strap sheet, hits and tally stay, and you can e-mail yourself its summary.'
+            ? 'Nobody can log notes into it after this, crew included. The strap sheet, finds and tally stay, and you can e-mail yourself its summary.'
             : `This removes the hunt, its strap sheet and all ${formatCount(hunt.notesSearched)} notes logged in it, for the whole crew. It cannot be undone.`
         }
         confirmLabel={asking === 'close' ? 'Close hunt' : 'Delete for good'}
@@ -315,7 +315,7 @@ export function HuntScreen() {
   return (
     <Screen
       title={data.title}
-      subtitle={`${data.source} · $${data.denomination} notes · ${formatDate(data.startedAt)}`}
+      subtitle={caption(data.source, `$${data.denomination} notes`, formatDate(data.startedAt))}
       maxWidth={1320}
       actions={
         <>

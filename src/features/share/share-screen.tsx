@@ -9,7 +9,7 @@ import { ApiError, absoluteApiUrl } from '@/lib/api/client';
 import { useTheme } from '@/theme/theme-provider';
 import { useLayout } from '@/theme/use-layout';
 import { fonts, radius, space } from '@/theme/tokens';
-import { oneInText } from '../sift/reading-view';
+import { formatOneIn } from '@/lib/format';
 import { useSharedKeeper } from './api';
 
 function gradeText(grade: number | null): string {
@@ -85,7 +85,7 @@ export function ShareScreen() {
             <View style={styles.badges}>
               {keeper.patterns.length ? (
                 keeper.patterns.map((pattern) => (
-                  <Badge key={pattern.id} label={`${pattern.name} · ${oneInText(pattern.oneIn ?? Infinity)}`} tone="hit" accessibilityLabel={`Pattern: ${pattern.name}`} />
+                  <Badge key={pattern.id} label={`${pattern.name} · ${formatOneIn(pattern.oneIn ?? Infinity)}`} tone="hit" accessibilityLabel={`Pattern: ${pattern.name}`} />
                 ))
               ) : (
                 <Badge label="no pattern" />

@@ -8,7 +8,7 @@ const cell = (value: string | number): string => {
 };
 
 /**
- * The sweep's hits as CSV, one line a hit, in serial order. Digits are kept as text with their leading
+ * The sweep's finds as CSV, one line a find, in serial order. Digits are kept as text with their leading
  * zeros; patterns are joined with "; " so the file opens as one column per field in a spreadsheet.
  */
 export function sweepCsv(result: SweepResult, serial: Pick<ParsedSerial, 'prefix' | 'suffix' | 'star'>): string {

@@ -90,7 +90,7 @@ export function SweepScreen() {
   return (
     <Screen
       title="Sweep"
-      subtitle="Every hit in a run of sequential new notes: a strap, a bundle, a brick or more."
+      subtitle="Every find in a run of sequential new notes: a strap, a bundle, a brick or more."
       actions={<Button kind="quiet" label="‹ Hunts" accessibilityLabel="Back to hunts" onPress={() => router.push('/hunts')} testID="sweep-to-hunts" />}
     >
       <Card>
@@ -107,7 +107,7 @@ export function SweepScreen() {
             <Button
               kind="secondary"
               label="Export CSV"
-              accessibilityLabel="Export the hits as a CSV file"
+              accessibilityLabel="Export the finds as a CSV file"
               onPress={() => void exportCsv()}
               disabled={swept.result.hits.length === 0}
               testID="sweep-export"

@@ -93,7 +93,7 @@ export function TallyScreen() {
   return (
     <Screen
       title="Tally"
-      subtitle="Your hit rate against what chance predicts for the same number of notes."
+      subtitle="Your find rate against what chance predicts for the same number of notes."
       maxWidth={1320}
       actions={<Button kind="quiet" label="‹ Hunts" accessibilityLabel="Back to hunts" onPress={() => router.push('/hunts')} testID="tally-to-hunts" />}
     >
@@ -144,12 +144,12 @@ export function TallyScreen() {
           >
             <ChanceSection figures={data} wide={isWide} testID="tally-chance" />
           </Section>
-          <Section title="Per hunt" subtitle="Hits per 1,000 notes in each hunt of the period." testID="tally-hunts">
+          <Section title="Per hunt" subtitle="Finds per 1,000 notes in each hunt of the period." testID="tally-hunts">
             <RateSection what="hunts" firstHeader="Hunt" rows={byHunt} average={data.perThousand} wide={isWide} testID="tally-by-hunt" />
           </Section>
           <Section
             title="Over time"
-            subtitle={`Hits per 1,000 notes ${bucket === 'week' ? 'each week (from Monday)' : 'each month'}, by the day a note was logged.`}
+            subtitle={`Finds per 1,000 notes ${bucket === 'week' ? 'each week (from Monday)' : 'each month'}, by the day a note was logged.`}
             testID="tally-time"
           >
             <RateSection

@@ -38,7 +38,7 @@ export function HitsTable({ hits, wide, showLoggedBy }: HitsTableProps) {
   const theme = useTheme();
   if (!wide) {
     return (
-      <View role="list" aria-label={`Hits, ${hits.length} notes`} style={styles.cards} testID="hits-table">
+      <View role="list" aria-label={`Finds, ${hits.length} notes`} style={styles.cards} testID="hits-table">
         {hits.map((scan) => (
           <View
             key={scan.id}
@@ -98,7 +98,7 @@ export function HitsTable({ hits, wide, showLoggedBy }: HitsTableProps) {
   ];
   return (
     <DataTable
-      label={`Hits, ${hits.length} notes`}
+      label={`Finds, ${hits.length} notes`}
       columns={columns}
       rows={hits}
       rowKey={(scan) => scan.id}

@@ -4,7 +4,8 @@ import { PATTERN_NAMES, type Reading } from '@shared/engine';
 import { Badge } from '@/components/ui/badge';
 import { Text } from '@/components/ui/text';
 import { space } from '@/theme/tokens';
-import { nearMissLines, oneInText } from '../../sift/reading-view';
+import { nearMissLines } from '../../sift/reading-view';
+import { formatOneIn } from '@/lib/format';
 
 /** The server's reading of a keeper's serial: patterns, odds, near misses and the trade notes that apply. */
 export function KeeperReading({ reading }: { reading: ReadingView }) {
@@ -22,7 +23,7 @@ export function KeeperReading({ reading }: { reading: ReadingView }) {
       </Text>
       {reading.odds.combination ? (
         <Text tone="muted">
-          {oneInText(reading.odds.combination.oneIn ?? Infinity)} serials has{' '}
+          {formatOneIn(reading.odds.combination.oneIn ?? Infinity)} serials has{' '}
           {reading.odds.combination.ids.length > 1 ? 'all of these patterns' : 'this pattern'} ({reading.odds.combination.count.toLocaleString('en-US')} of{' '}
           {reading.odds.domainSize.toLocaleString('en-US')}).
         </Text>

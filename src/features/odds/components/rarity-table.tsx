@@ -5,7 +5,7 @@ import { Text } from '@/components/ui/text';
 import { useTheme } from '@/theme/theme-provider';
 import { useLayout } from '@/theme/use-layout';
 import { fonts, space } from '@/theme/tokens';
-import { oneInText } from '../../sift/reading-view';
+import { formatOneIn } from '@/lib/format';
 
 interface Row {
   key: string;
@@ -74,11 +74,11 @@ export function RarityTable({ lowLimit, weightOf }: { lowLimit: LowLimit; weight
             <Text bold>{row.name}</Text>
             <Text variant="caption" tone="muted">
               {row.definition}
-              {isWide ? '' : ` · ${oneInText(row.oneIn)}`}
+              {isWide ? '' : ` · ${formatOneIn(row.oneIn)}`}
             </Text>
           </View>
           <Text style={[styles.num, styles.mono]}>{fmt(row.count)}</Text>
-          {isWide ? <Text style={[styles.num, styles.mono]}>{oneInText(row.oneIn).replace('1 in ', '')}</Text> : null}
+          {isWide ? <Text style={[styles.num, styles.mono]}>{formatOneIn(row.oneIn).replace('1 in ', '')}</Text> : null}
           <Text style={[styles.small, styles.mono]}>{row.points.toFixed(2)}</Text>
           <Text style={[styles.small, styles.mono, { color: row.weight ? theme.hit : theme.inkFaint }]}>{row.weight ?? '–'}</Text>
         </View>

@@ -15,12 +15,12 @@ export const SWEEP_PAGE = 100;
 
 const count = (value: number) => value.toLocaleString('en-US');
 
-/** "12 hits in 4,000 notes, 12345600 to 12349599". */
+/** "12 finds in 4,000 notes, 12345600 to 12349599". */
 export function sweepHeadline(result: SweepResult): string {
   const first = String(result.first).padStart(8, '0');
   const last = String(result.last).padStart(8, '0');
   const hits = result.hits.length;
-  return `${count(hits)} ${hits === 1 ? 'hit' : 'hits'} in ${count(result.count)} ${result.count === 1 ? 'note' : 'notes'}, ${first} to ${last}`;
+  return `${count(hits)} ${hits === 1 ? 'find' : 'finds'} in ${count(result.count)} ${result.count === 1 ? 'note' : 'notes'}, ${first} to ${last}`;
 }
 
 interface SweepResultsProps {
@@ -95,7 +95,7 @@ export function SweepResults({ result, serial, wide }: SweepResultsProps) {
       )}
       {result.hits.length ? (
         <DataTable
-          label={`Hits of the sweep, ${count(result.hits.length)} serials${pages > 1 ? `, page ${page + 1} of ${pages}` : ''}`}
+          label={`Finds of the sweep, ${count(result.hits.length)} serials${pages > 1 ? `, page ${page + 1} of ${pages}` : ''}`}
           columns={columns}
           rows={shown}
           rowKey={(hit) => hit.serial}
