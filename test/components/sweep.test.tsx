@@ -87,7 +87,7 @@ describe('the sweep results', () => {
     render(<SweepResults result={result} serial={parsed('11111100')} wide={false} />);
     expect(screen.getByTestId('sweep-headline').textContent).toBe(sweepHeadline(result));
     // 10…19 minus 11 (9), x1 for x ≠ 1 (9), xx for x ≠ 1 (9), and the solid: 28.
-    expect(sweepHeadline(result)).toBe('28 hits in 100 notes, 11111100 to 11111199');
+    expect(sweepHeadline(result)).toBe('28 finds in 100 notes, 11111100 to 11111199');
     const table = screen.getByRole('table');
     const solid = within(table).getAllByRole('row').find((row) => row.textContent?.startsWith('11111111'));
     expect(within(solid!).getAllByRole('cell').map((cell) => cell.textContent)).toEqual(['11111111', '11', 'solid']);

@@ -22,13 +22,17 @@ export interface BrowserSession {
  * Debian's Chromium through playwright-core, with the flags this closed network needs
  * (no background networking, no component updates) and a throwaway profile.
  */
-export async function openBrowser(viewport: { width: number; height: number }): Promise<BrowserSession> {
+export async function openBrowser(
+  viewport: { width: number; height: number },
+  options: { colorScheme?: 'light' | 'dark' } = {},
+): Promise<BrowserSession> {
   const profile = mkdtempSync(join(tmpdir(), 'strapsift-chromium-'));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     headless: true,
     viewport,
     deviceScaleFactor: 1,
+    colorScheme: options.colorScheme ?? 'light',
     args: [
       '--headless',
       '--no-sandbox',

@@ -91,7 +91,7 @@ function StrapSheetSection({ hunt, wide }: { hunt: HuntDetail; wide: boolean }) 
             compact
             kind="secondary"
             label="Print strap sheet"
-            accessibilityLabel="Print the strap sheet for the teller"
+            accessibilityLabel="Print strap sheet for the teller"
             onPress={() => sheet.data && printSheet(sheetText(sheet.data, hunt.startedAt))}
             testID="print-sheet"
           />
@@ -165,7 +165,7 @@ function ChanceBlock({ hunt, wide }: { hunt: HuntDetail; wide: boolean }) {
     <Section
       title="Against chance"
       testID="hunt-tally"
-      actions={<Button compact kind="quiet" label="Open Tally" accessibilityLabel="Open the Tally for every hunt" onPress={() => router.push('/tally')} />}
+      actions={<Button compact kind="quiet" label="Open Tally" accessibilityLabel="Open Tally for every hunt" onPress={() => router.push('/tally')} />}
     >
       {tally.data ? (
         <ChanceSection figures={tally.data} wide={wide} testID="hunt-chance" />

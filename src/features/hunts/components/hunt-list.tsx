@@ -7,7 +7,7 @@ import { PatternBadges } from '@/components/ui/pattern-badges';
 import { Text } from '@/components/ui/text';
 import { useTheme } from '@/theme/theme-provider';
 import { fonts, radius, space } from '@/theme/tokens';
-import { caption, countOf, formatCount, formatDate } from '@/lib/format';
+import { caption, formatCount, formatDate } from '@/lib/format';
 
 function BestFind({ hunt }: { hunt: HuntSummary }) {
   const theme = useTheme();
@@ -44,7 +44,7 @@ export function HuntCards({ hunts, onOpen }: { hunts: readonly HuntSummary[]; on
         <View key={hunt.id} role="listitem">
         <Pressable
           accessibilityRole="button"
-          accessibilityLabel={`Open hunt ${hunt.title}, ${formatCount(hunt.notesSearched)} notes, ${countOf(hunt.hits, 'find')}`}
+          accessibilityHint="Opens the hunt"
           onPress={() => onOpen(hunt.id)}
           testID={`hunt-card-${hunt.id}`}
           style={({ pressed }) => [

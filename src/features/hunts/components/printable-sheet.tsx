@@ -1,5 +1,6 @@
 import { StyleSheet, Text, View } from 'react-native';
 import type { StrapRow, StrapSheet } from '@shared/contracts';
+import { balanceOf } from '@shared/straps';
 import { NOTES_PER_STRAP } from '@shared/trade';
 import { fonts } from '@/theme/tokens';
 import { printedStraps } from '../sheet-text';
@@ -39,7 +40,7 @@ function StrapTable({ rows }: { rows: StrapRow[] }) {
             {row.notesBack}
           </Text>
           <Text role="cell" style={[styles.cell, styles.mark]}>
-            {row.complete ? '✓' : row.notesBack < NOTES_PER_STRAP ? `${NOTES_PER_STRAP - row.notesBack} short` : `${row.notesBack - NOTES_PER_STRAP} over`}
+            {row.complete ? '✓' : balanceOf(row.notesBack).label}
           </Text>
         </View>
       ))}

@@ -62,7 +62,6 @@ export function HuntChooser({ onChosen, onCancel }: { onChosen(hunt: HuntSummary
             <Pressable
               key={hunt.id}
               accessibilityRole="button"
-              accessibilityLabel={`Continue ${hunt.title}`}
               onPress={() => onChosen(hunt)}
               style={({ hovered }: { hovered?: boolean }) => [styles.huntRow, { borderColor: theme.line }, hovered && { backgroundColor: theme.surfaceSunken }]}
             >
