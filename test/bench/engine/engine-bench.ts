@@ -29,9 +29,14 @@ import {
   sweep,
   warmTables,
 } from '../../../shared/engine';
+import { readFlags } from '../../../scripts/lib/cli-flags';
 
 const root = fileURLToPath(new URL('../../..', import.meta.url));
-const write = !process.argv.includes('--no-write');
+const USAGE = `usage: npm run bench -- [--no-write]
+
+  --no-write   print the engine figures only; leave docs/PERFORMANCE.md alone
+  --help       this text`;
+const write = !readFlags(process.argv.slice(2), { 'no-write': { type: 'boolean' } }, USAGE)['no-write'];
 
 v8.setFlagsFromString('--expose-gc');
 const gc = vm.runInNewContext('gc') as () => void;
