@@ -1,4 +1,5 @@
 import { updateStrapRequest, type StrapRow, type UpdateStrapRequest } from '@shared/contracts';
+import { flatFieldErrors } from '@shared/contracts/field-errors';
 import { balanceOf, isTouched, strapFigures, type StrapBalance, type StrapFigures } from '@shared/straps';
 
 /** What the strap editor holds while the hunter types: text, so a half-typed "−" is never lost. */
@@ -40,11 +41,11 @@ export function parseStrapDraft(draft: StrapDraft): DraftResult {
   };
   const parsed = updateStrapRequest.safeParse(body);
   if (parsed.success) return { ok: true, body: parsed.data };
+  const { swappedIn, shortOver, note } = flatFieldErrors(parsed.error);
   const errors: Partial<Record<StrapDraftField, string>> = {};
-  for (const issue of parsed.error.issues) {
-    const field = issue.path[0];
-    if ((field === 'swappedIn' || field === 'shortOver' || field === 'note') && !errors[field]) errors[field] = issue.message;
-  }
+  if (swappedIn) errors.swappedIn = swappedIn;
+  if (shortOver) errors.shortOver = shortOver;
+  if (note) errors.note = note;
   return { ok: false, errors };
 }
 
