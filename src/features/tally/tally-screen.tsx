@@ -133,7 +133,7 @@ export function TallyScreen() {
         <>
           <StatRow>
             <Stat label="Notes searched" value={formatCount(data.notes)} testID="tally-notes" />
-            <Stat label="Hits" value={formatCount(data.hits)} tone={data.hits ? 'hit' : 'ink'} />
+            <Stat label="Finds" value={formatCount(data.hits)} tone={data.hits ? 'hit' : 'ink'} />
             <Stat label="Per 1,000 notes" value={formatRate(data.perThousand)} testID="tally-rate" />
             <Stat label="Pulled" value={formatCount(data.pulled)} hint={`${formatCount(data.keeps)} scored as keepers`} />
           </StatRow>
