@@ -1,5 +1,5 @@
 import { describe, expect, it, vi } from 'vitest';
-import { IMPORT_CHUNK_ROWS, type CreateHuntRequest, type ImportRow, type ImportRowsRequest } from '@shared/contracts';
+import { IMPORT_CHUNK_ROWS, type CreateHuntRequest, type ImportRow, type ImportRowsRequest, type ImportRowsResponse } from '@shared/contracts';
 import { runImport, type ImportIo } from '../../src/features/you/api';
 
 const rows = (n: number, firstDay = 10): ImportRow[] =>
@@ -16,7 +16,7 @@ function fakeIo() {
   const io = {
     createHunt: vi.fn(async (_: CreateHuntRequest) => ({ id: 'new-hunt' })),
     deleteHunt: vi.fn(async (_: string) => undefined),
-    importRows: vi.fn(async ({ rows: part }: ImportRowsRequest) => {
+    importRows: vi.fn(async ({ rows: part }: ImportRowsRequest): Promise<ImportRowsResponse> => {
       const fresh = part.filter((row) => !seen.has(row.serial));
       fresh.forEach((row) => seen.add(row.serial));
       return { stored: fresh.length, duplicates: part.length - fresh.length, keepers: 0, rejected: [] };
