@@ -2,7 +2,7 @@ import type { DataSource } from 'typeorm';
 import { z } from 'zod';
 import type { AdminStats, AdminUser, AdminUserPage, AdminUserQuery } from '../../../shared/contracts/admin';
 import { containsPattern } from '../../lib/like';
-import { decodeCursor, encodeCursor } from '../../lib/cursor';
+import { afterCursor, decodeCursor, keysetPage } from '../../lib/cursor';
 import { HttpError, notFound } from '../../lib/errors';
 import { int } from '../../lib/patterns';
 import type { UserRole } from '../users/user.entity';
@@ -21,10 +21,7 @@ export class AdminService {
       params.push(containsPattern(query.query));
       where.push(`(u.email ILIKE $${params.length} OR u.display_name ILIKE $${params.length})`);
     }
-    if (after) {
-      params.push(after[0]);
-      where.push(`u.email > $${params.length}`);
-    }
+    if (after) where.push(afterCursor(params, ['u.email'], ['text'], after, 'ASC'));
     params.push(query.limit + 1);
     const rows: Array<Record<string, unknown>> = await this.dataSource.query(
       `SELECT u.id, u.email, u.display_name, u.role, u.disabled, u.created_at,
@@ -37,12 +34,8 @@ export class AdminService {
         LIMIT $${params.length}`,
       params,
     );
-    const pageRows = rows.slice(0, query.limit);
-    const last = pageRows[pageRows.length - 1];
-    return {
-      items: pageRows.map(toAdminUser),
-      nextCursor: rows.length > query.limit && last ? encodeCursor([last.email as string]) : null,
-    };
+    const { page, nextCursor } = keysetPage(rows, query.limit, (last) => [String(last.email)]);
+    return { items: page.map(toAdminUser), nextCursor };
   }
 
   /**

@@ -1,7 +1,7 @@
 import type { DataSource } from 'typeorm';
 import { scanInput, type RejectedScan, type ScanBatchResponse, type ScanListQuery, type ScanPage } from '../../../shared/contracts/scans';
 import { HttpError, fieldsFromZod, forbidden, notFound } from '../../lib/errors';
-import { decodeCursor, encodeCursor, timeIdCursor } from '../../lib/cursor';
+import { afterCursor, decodeCursor, keysetPage, timeIdCursor } from '../../lib/cursor';
 import { idsOf, maskOf } from '../../lib/patterns';
 import { huntAccess } from '../crew/hunt-access';
 import type { HuntStatus } from '../hunts/hunt.entity';
@@ -29,6 +29,46 @@ function fieldSummary(fields: Record<string, string>): string {
   return Object.entries(fields)
     .map(([field, message]) => `${field} ${message}`)
     .join('; ');
+}
+
+/** A row of the hunt's note list as PostgreSQL returns it (pg gives timestamptz as Date, numeric as text). */
+interface ScanListRow {
+  id: string;
+  hunt_id: string;
+  strap: number;
+  serial: string;
+  digits: string;
+  prefix: string;
+  suffix: string;
+  star: boolean;
+  district: string | null;
+  pulled: boolean;
+  pattern_mask: number;
+  points: string | number;
+  keep: boolean;
+  scanned_at: Date;
+  user_id: string;
+  display_name: string;
+}
+
+function toScanItem(row: ScanListRow): ScanPage['items'][number] {
+  return {
+    id: row.id,
+    huntId: row.hunt_id,
+    strap: row.strap,
+    serial: row.serial,
+    digits: row.digits,
+    prefix: row.prefix,
+    suffix: row.suffix,
+    star: row.star,
+    district: row.district ?? null,
+    pulled: row.pulled,
+    patterns: idsOf(row.pattern_mask),
+    points: Number(row.points),
+    keep: row.keep,
+    scannedAt: row.scanned_at.toISOString(),
+    loggedBy: { id: row.user_id, displayName: row.display_name },
+  };
 }
 
 export class ScansService {
@@ -165,12 +205,9 @@ export class ScansService {
       params.push(query.strap);
       where.push(`s.strap = $${params.length}`);
     }
-    if (after) {
-      params.push(after[0], after[1]);
-      where.push(`(s.scanned_at, s.id) < ($${params.length - 1}::timestamptz, $${params.length}::uuid)`);
-    }
+    if (after) where.push(afterCursor(params, ['s.scanned_at', 's.id'], ['timestamptz', 'uuid'], after, 'DESC'));
     params.push(query.limit + 1);
-    const rows: Array<Record<string, unknown>> = await this.dataSource.query(
+    const rows: ScanListRow[] = await this.dataSource.query(
       `SELECT s.id, s.hunt_id, s.strap, s.serial, s.digits, s.prefix, s.suffix, s.star, s.district, s.pulled,
               s.pattern_mask, s.points, s.keep, s.scanned_at, s.user_id, u.display_name
          FROM scans s JOIN users u ON u.id = s.user_id
@@ -179,28 +216,8 @@ export class ScansService {
         LIMIT $${params.length}`,
       params,
     );
-    const pageRows = rows.slice(0, query.limit);
-    const last = pageRows[pageRows.length - 1];
-    return {
-      items: pageRows.map((row) => ({
-        id: row.id as string,
-        huntId: row.hunt_id as string,
-        strap: row.strap as number,
-        serial: row.serial as string,
-        digits: row.digits as string,
-        prefix: row.prefix as string,
-        suffix: row.suffix as string,
-        star: row.star as boolean,
-        district: (row.district as string | null) ?? null,
-        pulled: row.pulled as boolean,
-        patterns: idsOf(row.pattern_mask as number),
-        points: Number(row.points),
-        keep: row.keep as boolean,
-        scannedAt: (row.scanned_at as Date).toISOString(),
-        loggedBy: { id: row.user_id as string, displayName: row.display_name as string },
-      })),
-      nextCursor: rows.length > query.limit && last ? encodeCursor([(last.scanned_at as Date).toISOString(), last.id as string]) : null,
-    };
+    const { page, nextCursor } = keysetPage(rows, query.limit, (last) => [last.scanned_at.toISOString(), last.id]);
+    return { items: page.map(toScanItem), nextCursor };
   }
 
   /**
