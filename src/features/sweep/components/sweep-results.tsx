@@ -106,7 +106,7 @@ export function SweepResults({ result, serial, wide }: SweepResultsProps) {
         <View style={styles.pager}>
           <Button compact kind="secondary" label="‹ Previous" onPress={() => setPage(page - 1)} disabled={page === 0} testID="sweep-previous" />
           <Text tone="muted" testID="sweep-page">
-            Hits {count(page * SWEEP_PAGE + 1)}–{count(page * SWEEP_PAGE + shown.length)} of {count(result.hits.length)}
+            Finds {count(page * SWEEP_PAGE + 1)}–{count(page * SWEEP_PAGE + shown.length)} of {count(result.hits.length)}
           </Text>
           <Button compact kind="secondary" label="Next ›" onPress={() => setPage(page + 1)} disabled={page >= pages - 1} testID="sweep-next" />
         </View>
