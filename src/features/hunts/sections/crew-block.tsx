@@ -1,16 +1,16 @@
 import type { HuntDetail } from '@shared/contracts';
 import { AsyncBlock } from '@/components/ui/async-block';
+import { SectionCard } from '@/components/ui/section-card';
 import { useSession } from '@/lib/session/session-provider';
 import { addMember, removeMember, useHuntMembers } from '../api';
 import { CrewList } from '../components/crew-list';
 import { InviteCrew } from '../components/invite-crew';
-import { HuntSection } from './hunt-section';
 
 export function CrewBlock({ hunt, onLeft }: { hunt: HuntDetail; onLeft(): void }) {
   const members = useHuntMembers(hunt.id);
   const { user } = useSession();
   return (
-    <HuntSection title={`Crew · ${hunt.memberCount}`} testID="crew-section">
+    <SectionCard title={`Crew · ${hunt.memberCount}`} testID="crew-section">
       <AsyncBlock what="crew" data={members.data} error={members.error} retry={() => void members.mutate()}>
         {(data) => (
           <CrewList
@@ -24,6 +24,6 @@ export function CrewBlock({ hunt, onLeft }: { hunt: HuntDetail; onLeft(): void }
         )}
       </AsyncBlock>
       {hunt.role === 'owner' && hunt.status === 'open' ? <InviteCrew huntId={hunt.id} /> : null}
-    </HuntSection>
+    </SectionCard>
   );
 }

@@ -3,11 +3,11 @@ import type { HuntDetail } from '@shared/contracts';
 import { AsyncBlock } from '@/components/ui/async-block';
 import { Button } from '@/components/ui/button';
 import { Text } from '@/components/ui/text';
+import { SectionCard } from '@/components/ui/section-card';
 import { formatCount } from '@/lib/format';
 import { space } from '@/theme/tokens';
 import { useHuntScans } from '../api';
 import { HitsTable } from '../components/hits-table';
-import { HuntSection } from './hunt-section';
 
 /** Pages of 200 notes read before the finds table asks: 1,000 notes, ten straps. */
 const PAGES_AT_ONCE = 5;
@@ -21,7 +21,7 @@ export function FindsSection({ hunt, wide, crew }: { hunt: HuntDetail; wide: boo
   const more = !!pages[pages.length - 1]?.nextCursor;
   const busy = scans.isValidating && pages.length < scans.size;
   return (
-    <HuntSection title={`Finds${scans.data ? ` · ${finds.length}${more ? '+' : ''}` : ''}`} testID="hits-section">
+    <SectionCard title={`Finds${scans.data ? ` · ${finds.length}${more ? '+' : ''}` : ''}`} testID="hits-section">
       <AsyncBlock what="finds" data={scans.data} error={scans.error} retry={() => void scans.mutate()}>
         {() =>
           finds.length === 0 && !more ? (
@@ -46,7 +46,7 @@ export function FindsSection({ hunt, wide, crew }: { hunt: HuntDetail; wide: boo
           />
         </View>
       ) : null}
-    </HuntSection>
+    </SectionCard>
   );
 }
 

@@ -6,11 +6,11 @@ import { Button } from '@/components/ui/button';
 import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
+import { SectionCard } from '@/components/ui/section-card';
 import { useSubmit } from '@/lib/api/use-submit';
 import { formatCount, formatDate } from '@/lib/format';
 import { space } from '@/theme/tokens';
 import { closeHunt, deleteHunt, mailSummary } from '../api';
-import { HuntSection } from './hunt-section';
 
 /** Close, delete or mail the summary (the owner); a line saying whose hunt it is (crew). */
 export function ManageBlock({ hunt }: { hunt: HuntDetail }) {
@@ -30,16 +30,16 @@ export function ManageBlock({ hunt }: { hunt: HuntDetail }) {
   });
   if (hunt.role !== 'owner') {
     return (
-      <HuntSection title="This hunt" testID="manage-section">
+      <SectionCard title="This hunt" testID="manage-section">
         <Text tone="muted">
           You are crew in {hunt.owner.displayName}&apos;s hunt: you log notes and square your straps; closing and deleting are theirs.
         </Text>
-      </HuntSection>
+      </SectionCard>
     );
   }
   const current = asking === 'close' ? closing : deleting;
   return (
-    <HuntSection title="This hunt" testID="manage-section">
+    <SectionCard title="This hunt" testID="manage-section">
       <Text tone="muted">
         {hunt.status === 'open'
           ? 'Close the hunt when the straps have gone back: no more notes can be logged into it, and its figures stay.'
@@ -75,7 +75,7 @@ export function ManageBlock({ hunt }: { hunt: HuntDetail }) {
         }}
         testID="hunt-confirm"
       />
-    </HuntSection>
+    </SectionCard>
   );
 }
 

@@ -2,19 +2,19 @@ import type { HuntDetail } from '@shared/contracts';
 import { AsyncBlock } from '@/components/ui/async-block';
 import { Button } from '@/components/ui/button';
 import { Text } from '@/components/ui/text';
+import { SectionCard } from '@/components/ui/section-card';
 import { useSession } from '@/lib/session/session-provider';
 import { updateStrap, useStrapSheet } from '../api';
 import { PrintableSheet } from '../components/printable-sheet';
 import { StrapSheetEditor } from '../components/strap-sheet-editor';
 import { PrintArea, printSheet } from '../print-area';
 import { sheetText } from '../sheet-text';
-import { HuntSection } from './hunt-section';
 
 export function StrapSheetSection({ hunt, wide }: { hunt: HuntDetail; wide: boolean }) {
   const sheet = useStrapSheet(hunt.id);
   const { user } = useSession();
   return (
-    <HuntSection
+    <SectionCard
       title="Strap sheet"
       testID="strap-sheet-section"
       actions={
@@ -43,6 +43,6 @@ export function StrapSheetSection({ hunt, wide }: { hunt: HuntDetail; wide: bool
           </>
         )}
       </AsyncBlock>
-    </HuntSection>
+    </SectionCard>
   );
 }
