@@ -23,7 +23,7 @@ export class AdminService {
     }
     if (after) where.push(afterCursor(params, ['u.email'], ['text'], after, 'ASC'));
     params.push(query.limit + 1);
-    const rows: Array<Record<string, unknown>> = await this.dataSource.query(
+    const rows: AdminUserRow[] = await this.dataSource.query(
       `SELECT u.id, u.email, u.display_name, u.role, u.disabled, u.created_at,
               (SELECT count(*) FROM hunts h WHERE h.owner_id = u.id)::int AS hunts,
               (SELECT count(*) FROM scans s WHERE s.user_id = u.id)::int AS scans,
@@ -34,7 +34,7 @@ export class AdminService {
         LIMIT $${params.length}`,
       params,
     );
-    const { page, nextCursor } = keysetPage(rows, query.limit, (last) => [String(last.email)]);
+    const { page, nextCursor } = keysetPage(rows, query.limit, (last) => [last.email]);
     return { items: page.map(toAdminUser), nextCursor };
   }
 
@@ -55,7 +55,7 @@ export class AdminService {
       [userId, disabled],
     )) as [Array<{ id: string }>, number];
     if (!updated.length) throw notFound('No such account');
-    const rows: Array<Record<string, unknown>> = await this.dataSource.query(
+    const rows: AdminUserRow[] = await this.dataSource.query(
       `SELECT u.id, u.email, u.display_name, u.role, u.disabled, u.created_at,
               (SELECT count(*) FROM hunts h WHERE h.owner_id = u.id)::int AS hunts,
               (SELECT count(*) FROM scans s WHERE s.user_id = u.id)::int AS scans,
@@ -98,14 +98,27 @@ export class AdminService {
   }
 }
 
-function toAdminUser(row: Record<string, unknown>): AdminUser {
+/** A user row with its counts as PostgreSQL returns them (count(*)::int as number, timestamptz as Date). */
+interface AdminUserRow {
+  id: string;
+  email: string;
+  display_name: string;
+  role: UserRole;
+  disabled: boolean;
+  created_at: Date;
+  hunts: number | string;
+  scans: number | string;
+  keepers: number | string;
+}
+
+function toAdminUser(row: AdminUserRow): AdminUser {
   return {
-    id: row.id as string,
-    email: row.email as string,
-    displayName: row.display_name as string,
-    role: row.role as UserRole,
-    disabled: row.disabled as boolean,
-    createdAt: (row.created_at as Date).toISOString(),
+    id: row.id,
+    email: row.email,
+    displayName: row.display_name,
+    role: row.role,
+    disabled: row.disabled,
+    createdAt: row.created_at.toISOString(),
     hunts: int(row.hunts),
     scans: int(row.scans),
     keepers: int(row.keepers),
