@@ -135,7 +135,7 @@ export function SweepScreen() {
                 {starting.message ? <Notice tone="error">{starting.message}</Notice> : null}
                 <View style={styles.huntFields}>
                   <View style={styles.grow}>
-                    <Field label="Where the notes came from" value={source} onChangeText={setSource} error={starting.fields.source} testID="sweep-hunt-source" />
+                    <Field label="Where the notes came from (optional)" value={source} onChangeText={setSource} error={starting.fields.source} testID="sweep-hunt-source" />
                   </View>
                   <ChoiceRow
                     label="Face value"
