@@ -15,6 +15,7 @@ import { useTheme } from '@/theme/theme-provider';
 import { useLayout } from '@/theme/use-layout';
 import { fonts, space } from '@/theme/tokens';
 import { setUserDisabled, useAdminStats, useAdminUsers } from './api';
+import { formatCount } from '@/lib/format';
 
 const TOTALS: { key: keyof AdminStats; label: string }[] = [
   { key: 'users', label: 'Accounts' },
@@ -47,7 +48,7 @@ export function ConsoleScreen() {
             <Text variant="caption" tone="muted">
               {total.label}
             </Text>
-            <Text style={styles.totalNumber}>{stats.data ? stats.data[total.key].toLocaleString('en-US') : '…'}</Text>
+            <Text style={styles.totalNumber}>{stats.data ? formatCount(stats.data[total.key]) : '…'}</Text>
           </Card>
         ))}
       </View>
@@ -60,7 +61,7 @@ export function ConsoleScreen() {
             <View style={styles.userText}>
               <Text bold>{account.displayName}</Text>
               <Text variant="caption" tone="muted">
-                {account.email} · {account.hunts} hunts · {account.scans.toLocaleString('en-US')} notes · {account.keepers} keepers
+                {account.email} · {account.hunts} hunts · {formatCount(account.scans)} notes · {account.keepers} keepers
               </Text>
             </View>
             <View style={styles.userActions}>

@@ -5,7 +5,7 @@ import { Badge } from '@/components/ui/badge';
 import { Text } from '@/components/ui/text';
 import { space } from '@/theme/tokens';
 import { nearMissLines } from '../../sift/reading-view';
-import { formatOneIn } from '@/lib/format';
+import { formatCount, formatOneIn } from '@/lib/format';
 
 /** The server's reading of a keeper's serial: patterns, odds, near misses and the trade notes that apply. */
 export function KeeperReading({ reading }: { reading: ReadingView }) {
@@ -24,8 +24,8 @@ export function KeeperReading({ reading }: { reading: ReadingView }) {
       {reading.odds.combination ? (
         <Text tone="muted">
           {formatOneIn(reading.odds.combination.oneIn ?? Infinity)} serials has{' '}
-          {reading.odds.combination.ids.length > 1 ? 'all of these patterns' : 'this pattern'} ({reading.odds.combination.count.toLocaleString('en-US')} of{' '}
-          {reading.odds.domainSize.toLocaleString('en-US')}).
+          {reading.odds.combination.ids.length > 1 ? 'all of these patterns' : 'this pattern'} ({formatCount(reading.odds.combination.count)} of{' '}
+          {formatCount(reading.odds.domainSize)}).
         </Text>
       ) : null}
       {reading.score.lines.map((line) => (

@@ -9,11 +9,12 @@ import { Text } from '@/components/ui/text';
 import { useTheme } from '@/theme/theme-provider';
 import { fonts, space } from '@/theme/tokens';
 import { fullSerial, position } from '../sweep-input';
+import { formatCount } from '@/lib/format';
 
 /** Rows drawn at once: a brick of new notes rarely has more hits; a 10-million sweep pages. */
 export const SWEEP_PAGE = 100;
 
-const count = (value: number) => value.toLocaleString('en-US');
+const count = formatCount;
 
 /** "12 finds in 4,000 notes, 12345600 to 12349599". */
 export function sweepHeadline(result: SweepResult): string {
