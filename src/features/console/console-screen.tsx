@@ -44,7 +44,7 @@ export function ConsoleScreen() {
     <Screen title="Console" subtitle="Accounts and system totals. Admins only.">
       <View style={styles.totals}>
         {TOTALS.map((total) => (
-          <Card key={total.key} style={styles.total}>
+          <Card key={total.key} style={styles.total} testID={`console-total-${total.key}`}>
             <Text variant="caption" tone="muted">
               {total.label}
             </Text>
