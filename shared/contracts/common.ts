@@ -71,3 +71,13 @@ export const districtField = z
   .trim()
   .toUpperCase()
   .regex(/^[A-L]$/, 'must be a district letter A–L');
+
+/**
+ * The size of a star note's printing run, as the hunter looked it up in a published run list; the app
+ * ships no run data. The largest runs are 3,200,000 or 6,400,000 notes (common practice among hunters).
+ */
+export const starRunSize = z
+  .number({ message: 'must be a whole number of notes' })
+  .int('must be a whole number of notes')
+  .min(1, 'must be at least 1')
+  .max(100_000_000, 'must be at most 100,000,000');

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { cursorQuery, denomination, isoDateTime, page, patternId, serialDigits, uuid } from './common';
+import { cursorQuery, denomination, isoDateTime, page, patternId, serialDigits, seriesField, uuid } from './common';
 import { memberRole } from './crew';
 
 export const huntStatus = z.enum(['open', 'closed']);
@@ -23,6 +23,10 @@ export const createHuntRequest = z
     plannedStraps,
     /** Defaults to now; set it when logging a hunt after the fact. */
     startedAt: isoDateTime.optional(),
+    /** New notes in serial order rather than circulated ones (defaults to circulated). */
+    inSequence: z.boolean().optional(),
+    /** The series printed on the notes, when known. */
+    series: seriesField.nullable().optional(),
   })
   .strict();
 export type CreateHuntRequest = z.infer<typeof createHuntRequest>;
@@ -34,6 +38,8 @@ export const updateHuntRequest = z
     denomination: denomination.optional(),
     plannedStraps: plannedStraps.optional(),
     startedAt: isoDateTime.optional(),
+    inSequence: z.boolean().optional(),
+    series: seriesField.nullable().optional(),
   })
   .strict()
   .refine((body) => Object.keys(body).length > 0, { message: 'name at least one field to change', path: ['_'] });
@@ -60,6 +66,8 @@ export const huntSummary = z.object({
   source: z.string(),
   denomination: z.number().int(),
   plannedStraps: z.number().int(),
+  inSequence: z.boolean(),
+  series: z.string().nullable(),
   status: huntStatus,
   /** The caller's place in the hunt. */
   role: memberRole,

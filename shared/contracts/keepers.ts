@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { cursorQuery, denomination, isoDateTime, page, patternId, serialDigits, serialText, uuid, districtField, seriesField } from './common';
+import { cursorQuery, denomination, isoDateTime, page, patternId, serialDigits, serialText, starRunSize, uuid, districtField, seriesField } from './common';
 import { photoView } from './photos';
 import { readingSchema } from './reading';
 
@@ -26,6 +26,10 @@ const keeperFields = {
     .max(1_000_000_000, 'must be at most 1,000,000,000 cents')
     .nullable()
     .optional(),
+  /** The hunter's own judgement: never pressed, washed or repaired. */
+  originalPaper: z.boolean().nullable().optional(),
+  /** For a star note: the size of its printing run, as the hunter looked it up. */
+  starRunSize: starRunSize.nullable().optional(),
   status: keeperStatus.optional(),
   notes: z.string().max(2000, 'must be at most 2,000 characters').nullable().optional(),
   /** When the note was found; from the scan, else now. */
@@ -61,6 +65,8 @@ export const keeperSummary = z.object({
   facility: facility.nullable(),
   denomination: z.number().int().nullable(),
   grade: z.number().int().nullable(),
+  originalPaper: z.boolean().nullable(),
+  starRunSize: z.number().int().nullable(),
   estimatedValueCents: z.number().int().nullable(),
   status: keeperStatus,
   notes: z.string().nullable(),

@@ -1,7 +1,10 @@
 import { z } from 'zod';
-import { cursorQuery, isoDateTime, page, patternId, queryInt, serialDigits, serialText, uuid } from './common';
+import { cursorQuery, isoDateTime, page, patternId, queryInt, serialDigits, serialText, starRunSize, uuid } from './common';
 
 export const MAX_SCAN_BATCH = 1000;
+
+export const entryMethod = z.enum(['keypad', 'camera'], { message: 'must be keypad or camera' });
+export type EntryMethod = z.infer<typeof entryMethod>;
 
 /**
  * One logged note as the device sends it. Only these fields are read: any patterns or score the client
@@ -16,6 +19,12 @@ export const scanInput = z.object({
   star: z.boolean().optional(),
   pulled: z.boolean().optional(),
   scannedAt: isoDateTime,
+  /** Typed on the keypad (the default) or read by the camera. */
+  entryMethod: entryMethod.optional(),
+  /** The camera's confidence in the whole serial, 0–1; only for camera notes. */
+  cameraConfidence: z.number({ message: 'must be a number from 0 to 1' }).min(0, 'must be 0 or more').max(1, 'must be 1 or less').optional(),
+  /** For a star note: the size of its printing run, as the hunter looked it up. */
+  starRunSize: starRunSize.optional(),
 });
 export type ScanInput = z.infer<typeof scanInput>;
 
@@ -69,6 +78,9 @@ export const scanView = z.object({
   points: z.number(),
   keep: z.boolean(),
   scannedAt: isoDateTime,
+  entryMethod,
+  cameraConfidence: z.number().nullable(),
+  starRunSize: z.number().int().nullable(),
   loggedBy: z.object({ id: uuid, displayName: z.string() }),
 });
 export type ScanView = z.infer<typeof scanView>;

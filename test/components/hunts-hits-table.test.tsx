@@ -22,6 +22,9 @@ function scan(digits: string, patterns: PatternId[], extra: Partial<ScanView> = 
     points: 2.5,
     keep: false,
     scannedAt: '2026-03-02T15:04:00.000Z',
+    entryMethod: 'keypad',
+    cameraConfidence: null,
+    starRunSize: null,
     loggedBy: { id: '1c2d3e4f-5a6b-4c7d-8e9f-0a1b2c3d4e5f', displayName: 'Ada Vell' },
     ...extra,
   };

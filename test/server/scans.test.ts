@@ -114,6 +114,41 @@ describe('POST /api/scans/batch', () => {
     expect(listed.items.some((item) => item.patterns.length >= 2)).toBe(true);
   });
 
+  it('when notes say how they were entered, then the camera’s confidence is kept for camera notes only and the list shows both', async () => {
+    const hunt = await createHunt(api.app, owner);
+    const camera = scanOf(hunt.id, '31415926', { entryMethod: 'camera', cameraConfidence: 0.93 });
+    const typed = scanOf(hunt.id, '27182818', { entryMethod: 'keypad', cameraConfidence: 0.5 });
+    const plain = scanOf(hunt.id, '16180339');
+    const star = scanOf(hunt.id, '00001234*', { star: true, starRunSize: 320_000 });
+
+    const body = scanBatchResponse.parse((await postBatch(api.app, owner, [camera, typed, plain, star])).body);
+    expect(body.stored).toHaveLength(4);
+
+    const listed = scanPage.parse((await request(api.app).get(`/api/hunts/${hunt.id}/scans`).set(owner.auth)).body).items;
+    const byId = new Map(listed.map((s) => [s.id, s]));
+    expect(byId.get(camera.id)).toMatchObject({ entryMethod: 'camera', starRunSize: null });
+    expect(byId.get(camera.id)!.cameraConfidence).toBeCloseTo(0.93, 5);
+    expect(byId.get(typed.id)).toMatchObject({ entryMethod: 'keypad', cameraConfidence: null });
+    expect(byId.get(plain.id)).toMatchObject({ entryMethod: 'keypad', cameraConfidence: null });
+    expect(byId.get(star.id)).toMatchObject({ star: true, starRunSize: 320_000 });
+  });
+
+  it('when the entry method or confidence is out of range, then only that note is rejected naming the field', async () => {
+    const hunt = await createHunt(api.app, owner);
+    const bad = [
+      scanOf(hunt.id, '31415926', { entryMethod: 'voice' as never }),
+      scanOf(hunt.id, '31415927', { entryMethod: 'camera', cameraConfidence: 1.5 }),
+    ];
+    const good = scanOf(hunt.id, '31415928', { entryMethod: 'camera', cameraConfidence: 1 });
+
+    const body = scanBatchResponse.parse((await postBatch(api.app, owner, [...bad, good])).body);
+
+    expect(body.stored).toEqual([good.id]);
+    expect(body.rejected.map((r) => r.id).sort()).toEqual(bad.map((s) => s.id).sort());
+    expect(body.rejected.find((r) => r.id === bad[0]!.id)!.error).toMatch(/entryMethod/);
+    expect(body.rejected.find((r) => r.id === bad[1]!.id)!.error).toMatch(/cameraConfidence/);
+  });
+
   it('when the user has watch patterns and their own weights, then the stored score is the engine’s score with them', async () => {
     const user = await registerUser(api.app, 'scan-weights');
     const hunt = await createHunt(api.app, user);

@@ -29,6 +29,17 @@ export class HuntEntity {
   @Column({ name: 'planned_straps', type: 'integer' })
   plannedStraps: number;
 
+  /**
+   * New notes in serial order (straight from a Federal Reserve Bank) rather than circulated ones: their
+   * finds come in clumps, so Tally compares them with the exact sequential distribution, not Poisson.
+   */
+  @Column({ name: 'in_sequence', type: 'boolean', default: false })
+  inSequence: boolean;
+
+  /** The series printed on the notes, when the hunter knows it (e.g. "2017A"); checks serial formats. */
+  @Column({ type: 'varchar', length: 8, nullable: true })
+  series: string | null;
+
   @Column({ type: 'varchar', length: 8, default: 'open' })
   status: HuntStatus;
 

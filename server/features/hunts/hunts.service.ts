@@ -13,6 +13,8 @@ interface HuntListRow {
   source: string;
   denomination: number;
   planned_straps: number;
+  in_sequence: boolean;
+  series: string | null;
   status: HuntStatus;
   started_at: Date;
   closed_at: Date | null;
@@ -22,7 +24,7 @@ interface HuntListRow {
   member_count: number;
 }
 
-const HUNT_COLUMNS = `h.id, h.title, h.source, h.denomination, h.planned_straps, h.status, h.started_at, h.closed_at,
+const HUNT_COLUMNS = `h.id, h.title, h.source, h.denomination, h.planned_straps, h.in_sequence, h.series, h.status, h.started_at, h.closed_at,
   h.owner_id, u.display_name AS owner_name, m.role,
   (SELECT count(*)::int FROM hunt_members mm WHERE mm.hunt_id = h.id) AS member_count`;
 
@@ -76,6 +78,8 @@ export class HuntsService {
           source: request.source,
           denomination: request.denomination,
           plannedStraps: request.plannedStraps,
+          inSequence: request.inSequence ?? false,
+          series: request.series ?? null,
           status: 'open',
           startedAt: request.startedAt ? new Date(request.startedAt) : now,
           closedAt: null,
@@ -157,6 +161,8 @@ export class HuntsService {
         source: row.source,
         denomination: row.denomination,
         plannedStraps: row.planned_straps,
+        inSequence: row.in_sequence,
+        series: row.series ?? null,
         status: row.status,
         role: row.role,
         owner: { id: row.owner_id, displayName: row.owner_name },

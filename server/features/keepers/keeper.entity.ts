@@ -68,6 +68,14 @@ export class KeeperEntity {
   @Column({ type: 'smallint', nullable: true })
   grade: number | null;
 
+  /** The hunter's own yes/no: never pressed, washed or repaired. Null until they judge it. */
+  @Column({ name: 'original_paper', type: 'boolean', nullable: true })
+  originalPaper: boolean | null;
+
+  /** For a star note: the size of its printing run as the hunter looked it up (no run data ships). */
+  @Column({ name: 'star_run_size', type: 'integer', nullable: true })
+  starRunSize: number | null;
+
   @Column({ name: 'estimated_value_cents', type: 'integer', nullable: true })
   estimatedValueCents: number | null;
 

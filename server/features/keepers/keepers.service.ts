@@ -61,6 +61,8 @@ function toSummary(keeper: KeeperEntity, photos?: readonly PhotoView[]): KeeperS
     facility: keeper.facility,
     denomination: keeper.denomination,
     grade: keeper.grade,
+    originalPaper: keeper.originalPaper,
+    starRunSize: keeper.starRunSize,
     estimatedValueCents: keeper.estimatedValueCents,
     status: keeper.status,
     notes: keeper.notes,
@@ -174,10 +176,18 @@ export class KeepersService {
    */
   async create(userId: string, request: CreateKeeperRequest): Promise<{ keeper: KeeperDetail; created: boolean }> {
     const context = await this.weights.readingContext(userId);
-    let base: { serial: string; star: boolean; district: string | null; denomination: number | null; huntId: string | null; foundAt: Date };
+    let base: {
+      serial: string;
+      star: boolean;
+      district: string | null;
+      denomination: number | null;
+      huntId: string | null;
+      foundAt: Date;
+      starRunSize: number | null;
+    };
     if (request.scanId) {
       const rows: Array<Record<string, unknown>> = await this.dataSource.query(
-        `SELECT s.id, s.serial, s.star, s.district, s.hunt_id, s.scanned_at, h.denomination
+        `SELECT s.id, s.serial, s.star, s.district, s.hunt_id, s.scanned_at, s.star_run_size, h.denomination
            FROM scans s JOIN hunts h ON h.id = s.hunt_id JOIN hunt_members m ON m.hunt_id = s.hunt_id AND m.user_id = $2
           WHERE s.id = $1`,
         [request.scanId, userId],
@@ -193,9 +203,10 @@ export class KeepersService {
         denomination: scan.denomination as number,
         huntId: scan.hunt_id as string,
         foundAt: scan.scanned_at as Date,
+        starRunSize: (scan.star_run_size as number | null) ?? null,
       };
     } else {
-      base = { serial: request.serial!, star: false, district: null, denomination: null, huntId: null, foundAt: new Date() };
+      base = { serial: request.serial!, star: false, district: null, denomination: null, huntId: null, foundAt: new Date(), starRunSize: null };
     }
 
     const facts: NoteFacts = {
@@ -223,6 +234,8 @@ export class KeepersService {
           suffix: scored.suffix,
           star: scored.star,
           grade: request.grade ?? null,
+          originalPaper: request.originalPaper ?? null,
+          starRunSize: request.starRunSize ?? base.starRunSize,
           estimatedValueCents: request.estimatedValueCents ?? null,
           status: request.status ?? 'kept',
           notes: request.notes || null,
@@ -256,6 +269,8 @@ export class KeepersService {
     if (change.facility !== undefined) keeper.facility = change.facility;
     if (change.denomination !== undefined) keeper.denomination = change.denomination;
     if (change.grade !== undefined) keeper.grade = change.grade;
+    if (change.originalPaper !== undefined) keeper.originalPaper = change.originalPaper;
+    if (change.starRunSize !== undefined) keeper.starRunSize = change.starRunSize;
     if (change.estimatedValueCents !== undefined) keeper.estimatedValueCents = change.estimatedValueCents;
     if (change.status !== undefined) keeper.status = change.status;
     if (change.notes !== undefined) keeper.notes = change.notes || null;

@@ -69,6 +69,18 @@ export class ScanEntity {
   @Column({ type: 'boolean' })
   keep: boolean;
 
+  /** How the serial reached the device: typed on the keypad or read by the camera. */
+  @Column({ name: 'entry_method', type: 'varchar', length: 8, default: 'keypad' })
+  entryMethod: 'keypad' | 'camera';
+
+  /** The camera's confidence in the whole serial (0–1); null for typed notes. */
+  @Column({ name: 'camera_confidence', type: 'real', nullable: true })
+  cameraConfidence: number | null;
+
+  /** For a star note: the size of its printing run as the hunter looked it up (no run data ships). */
+  @Column({ name: 'star_run_size', type: 'integer', nullable: true })
+  starRunSize: number | null;
+
   @Column({ name: 'scanned_at', type: 'timestamptz' })
   scannedAt: Date;
 

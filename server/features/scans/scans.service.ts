@@ -1,5 +1,5 @@
 import type { DataSource } from 'typeorm';
-import { scanInput, type RejectedScan, type ScanBatchResponse, type ScanListQuery, type ScanPage } from '../../../shared/contracts/scans';
+import { scanInput, type EntryMethod, type RejectedScan, type ScanBatchResponse, type ScanListQuery, type ScanPage } from '../../../shared/contracts/scans';
 import { HttpError, fieldsFromZod, forbidden, notFound } from '../../lib/errors';
 import { afterCursor, decodeCursor, keysetPage, timeIdCursor } from '../../lib/cursor';
 import { idsOf, maskOf } from '../../lib/patterns';
@@ -22,6 +22,9 @@ interface Prepared {
   serial: string;
   pulled: boolean;
   scannedAt: string;
+  entryMethod: EntryMethod;
+  cameraConfidence: number | null;
+  starRunSize: number | null;
   reading: StoredReading;
 }
 
@@ -47,6 +50,10 @@ interface ScanListRow {
   points: string | number;
   keep: boolean;
   scanned_at: Date;
+  entry_method: EntryMethod;
+  /** numeric comes back as text. */
+  camera_confidence: string | number | null;
+  star_run_size: number | null;
   user_id: string;
   display_name: string;
 }
@@ -67,6 +74,9 @@ function toScanItem(row: ScanListRow): ScanPage['items'][number] {
     points: Number(row.points),
     keep: row.keep,
     scannedAt: row.scanned_at.toISOString(),
+    entryMethod: row.entry_method,
+    cameraConfidence: row.camera_confidence === null ? null : Number(row.camera_confidence),
+    starRunSize: row.star_run_size ?? null,
     loggedBy: { id: row.user_id, displayName: row.display_name },
   };
 }
@@ -137,6 +147,10 @@ export class ScansService {
         serial: input.serial,
         pulled: input.pulled === true,
         scannedAt: new Date(input.scannedAt).toISOString(),
+        entryMethod: input.entryMethod ?? 'keypad',
+        // A typed note has no camera confidence, whatever a client sends.
+        cameraConfidence: input.entryMethod === 'camera' ? (input.cameraConfidence ?? null) : null,
+        starRunSize: input.starRunSize ?? null,
         reading: result.reading,
       });
     }
@@ -165,12 +179,15 @@ export class ScansService {
   // scan_tombstones were deleted after an earlier upload and must not come back.
   private async insert(userId: string, scans: Prepared[]): Promise<Set<string>> {
     const rows: Array<{ id: string }> = await this.dataSource.query(
-      `INSERT INTO scans (id, hunt_id, user_id, strap, serial, digits, value, prefix, suffix, star, district, pulled, pattern_mask, points, keep, scanned_at)
+      `INSERT INTO scans (id, hunt_id, user_id, strap, serial, digits, value, prefix, suffix, star, district, pulled, pattern_mask, points, keep, scanned_at,
+                          entry_method, camera_confidence, star_run_size)
        SELECT t.id, t.hunt_id, $1::uuid, t.strap, t.serial, t.digits, t.value, t.prefix, t.suffix, t.star, t.district, t.pulled,
-              t.pattern_mask, t.points, t.keep, t.scanned_at
+              t.pattern_mask, t.points, t.keep, t.scanned_at, t.entry_method, t.camera_confidence, t.star_run_size
          FROM unnest($2::uuid[], $3::uuid[], $4::int[], $5::varchar[], $6::varchar[], $7::int[], $8::varchar[], $9::varchar[],
-                     $10::bool[], $11::varchar[], $12::bool[], $13::int[], $14::float8[], $15::bool[], $16::timestamptz[])
-           AS t(id, hunt_id, strap, serial, digits, value, prefix, suffix, star, district, pulled, pattern_mask, points, keep, scanned_at)
+                     $10::bool[], $11::varchar[], $12::bool[], $13::int[], $14::float8[], $15::bool[], $16::timestamptz[],
+                     $17::varchar[], $18::real[], $19::int[])
+           AS t(id, hunt_id, strap, serial, digits, value, prefix, suffix, star, district, pulled, pattern_mask, points, keep, scanned_at,
+                entry_method, camera_confidence, star_run_size)
         WHERE NOT EXISTS (SELECT 1 FROM scan_tombstones d WHERE d.id = t.id)
        ON CONFLICT (id) DO NOTHING
        RETURNING id`,
@@ -191,6 +208,9 @@ export class ScansService {
         scans.map((s) => s.reading.points),
         scans.map((s) => s.reading.keep),
         scans.map((s) => s.scannedAt),
+        scans.map((s) => s.entryMethod),
+        scans.map((s) => s.cameraConfidence),
+        scans.map((s) => s.starRunSize),
       ],
     );
     return new Set(rows.map((row) => row.id));
@@ -209,7 +229,8 @@ export class ScansService {
     params.push(query.limit + 1);
     const rows: ScanListRow[] = await this.dataSource.query(
       `SELECT s.id, s.hunt_id, s.strap, s.serial, s.digits, s.prefix, s.suffix, s.star, s.district, s.pulled,
-              s.pattern_mask, s.points, s.keep, s.scanned_at, s.user_id, u.display_name
+              s.pattern_mask, s.points, s.keep, s.scanned_at, s.entry_method, s.camera_confidence, s.star_run_size,
+              s.user_id, u.display_name
          FROM scans s JOIN users u ON u.id = s.user_id
         WHERE ${where.join(' AND ')}
         ORDER BY s.scanned_at DESC, s.id DESC
