@@ -3,6 +3,10 @@
 # Both write their measured figures into docs/PERFORMANCE.md. Pass --no-write to only print.
 set -euo pipefail
 source "$(dirname "$0")/lib/common.sh"
+# --help prints the usage without starting anything.
+for arg in "$@"; do
+  case "$arg" in -h | --help) exec node --import tsx test/bench/engine/engine-bench.ts --help ;; esac
+done
 
 trap stop_postgres_if_started EXIT
 ensure_node_modules

@@ -21,6 +21,15 @@ trap 'exit 130' INT TERM
 set -e
 trap 'echo "0 passed, 1 failed"' ERR
 ensure_node_modules
+
+# The gate comes first and is cheap: a type or lint error fails the run before any database starts.
+# SKIP_GATE=1 is for a quick loop on one test file, never for CI.
+if [ "${SKIP_GATE:-0}" != 1 ]; then
+  say "type check (tsc --noEmit)"
+  node_modules/.bin/tsc --noEmit -p tsconfig.json || die "the type check failed"
+  say "lint (eslint)"
+  node_modules/.bin/eslint . || die "the linter found problems"
+fi
 ensure_postgres
 [ "${QUICK:-0}" = 1 ] || ensure_chromium
 ensure_card_fonts

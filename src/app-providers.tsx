@@ -2,6 +2,7 @@ import type { ReactNode } from 'react';
 import { SWRConfig } from 'swr';
 import { ApiError } from './lib/api/api-error';
 import { SessionProvider } from './lib/session/session-provider';
+import { useFocusRing } from './theme/focus-ring';
 import { ThemeProvider } from './theme/theme-provider';
 
 const swrOptions = {
@@ -11,9 +12,15 @@ const swrOptions = {
   errorRetryCount: 3,
 };
 
+function FocusRing() {
+  useFocusRing();
+  return null;
+}
+
 export function AppProviders({ children }: { children: ReactNode }) {
   return (
     <ThemeProvider>
+      <FocusRing />
       <SessionProvider>
         <SWRConfig value={swrOptions}>{children}</SWRConfig>
       </SessionProvider>

@@ -41,3 +41,32 @@ const cursorTime = z
   .refine((value) => /^\d{4}-/.test(value) && !value.startsWith('0000') && Number.isFinite(Date.parse(value)), 'is not a time');
 
 export const timeIdCursor = z.tuple([cursorTime, z.string().uuid()]);
+
+/**
+ * The keyset condition for rows after a cursor, e.g. `(h.started_at, h.id) < ($2::timestamptz, $3::uuid)`,
+ * with the cursor's values pushed onto the query's parameters. `casts` gives each value's SQL type.
+ *
+ * @example
+ * afterCursor(params, ['s.scanned_at', 's.id'], ['timestamptz', 'uuid'], after, 'DESC')
+ */
+export function afterCursor(params: unknown[], columns: readonly string[], casts: readonly string[], values: readonly unknown[], direction: 'ASC' | 'DESC'): string {
+  const placeholders = values.map((value, i) => {
+    params.push(value);
+    return `$${params.length}::${casts[i]}`;
+  });
+  return `(${columns.join(', ')}) ${direction === 'DESC' ? '<' : '>'} (${placeholders.join(', ')})`;
+}
+
+/**
+ * A keyset query fetches one row more than the page: if it came, there is a next page, and its
+ * cursor is the sort key of the page's last row (null when that key is missing).
+ *
+ * @example
+ * keysetPage(rows, 50, (last) => [last.started_at.toISOString(), last.id])
+ */
+export function keysetPage<R>(rows: readonly R[], limit: number, keyOf: (last: R) => readonly (string | number)[] | null): { page: R[]; nextCursor: string | null } {
+  const page = rows.slice(0, limit);
+  const last = page[page.length - 1];
+  const key = rows.length > limit && last !== undefined ? keyOf(last) : null;
+  return { page, nextCursor: key ? encodeCursor(key) : null };
+}

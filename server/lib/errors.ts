@@ -1,8 +1,9 @@
+import { nestedFieldErrors, type FieldErrors } from '../../shared/contracts/field-errors';
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
 import { logger, scrubUrl } from './logger';
 
-export type FieldErrors = Record<string, string>;
+export type { FieldErrors };
 
 /** An error the caller can act on; everything else is answered as a 500 and logged. */
 export class HttpError extends Error {
@@ -23,14 +24,8 @@ export const forbidden = (what = 'You may not do that') => new HttpError(403, 'f
 export const unauthorized = (what = 'Sign in to continue') => new HttpError(401, 'unauthorized', what);
 export const conflict = (what: string) => new HttpError(409, 'conflict', what);
 
-export function fieldsFromZod(error: ZodError): FieldErrors {
-  const fields: FieldErrors = {};
-  for (const issue of error.issues) {
-    const key = issue.path.length ? issue.path.join('.') : '_';
-    fields[key] ??= issue.message;
-  }
-  return fields;
-}
+// The API answers with each field's full path, so a bad row in a batch is named exactly.
+export const fieldsFromZod = nestedFieldErrors;
 
 export function invalid(error: ZodError, message = 'Some fields need attention'): HttpError {
   return new HttpError(400, 'invalid', message, fieldsFromZod(error));

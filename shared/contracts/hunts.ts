@@ -6,7 +6,8 @@ export const huntStatus = z.enum(['open', 'closed']);
 export type HuntStatus = z.infer<typeof huntStatus>;
 
 const title = z.string().trim().min(1, 'is required').max(120, 'must be at most 120 characters');
-const source = z.string().trim().min(1, 'is required').max(120, 'must be at most 120 characters');
+// Optional, so a first hunt is one tap away; the client remembers the last one given.
+const source = z.string().trim().max(120, 'must be at most 120 characters');
 const plannedStraps = z
   .number({ message: 'must be a whole number' })
   .int('must be a whole number')
@@ -16,8 +17,8 @@ const plannedStraps = z
 export const createHuntRequest = z
   .object({
     title,
-    /** Where the notes came from, e.g. a branch of the hunter's bank. */
-    source,
+    /** Where the notes came from, e.g. a branch of the hunter's bank; empty when not given. */
+    source: source.default(''),
     denomination,
     plannedStraps,
     /** Defaults to now; set it when logging a hunt after the fact. */

@@ -29,7 +29,7 @@ export const scanInput = z.object({
 export type ScanInput = z.infer<typeof scanInput>;
 
 export const scanBatchRequest = z.object({
-  scans: z.array(scanInput).min(1, 'must hold at least one scan').max(MAX_SCAN_BATCH, 'must hold at most 1,000 scans'),
+  scans: z.array(scanInput).min(1, 'must hold at least one note').max(MAX_SCAN_BATCH, 'must hold at most 1,000 notes'),
 });
 export type ScanBatchRequest = z.infer<typeof scanBatchRequest>;
 
@@ -41,8 +41,8 @@ export type ScanBatchRequest = z.infer<typeof scanBatchRequest>;
 export const scanBatchEnvelope = z.object({
   scans: z
     .array(z.object({ id: uuid }).passthrough())
-    .min(1, 'must hold at least one scan')
-    .max(MAX_SCAN_BATCH, 'must hold at most 1,000 scans'),
+    .min(1, 'must hold at least one note')
+    .max(MAX_SCAN_BATCH, 'must hold at most 1,000 notes'),
 });
 
 export const rejectedScan = z.object({

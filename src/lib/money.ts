@@ -1,8 +1,4 @@
-/** "$12.50" for 1250 cents; money is integer cents everywhere and dollars only on screen. */
-export function formatCents(cents: number | null | undefined): string {
-  if (cents == null) return '—';
-  return `$${(cents / 100).toLocaleString('en-US', { minimumFractionDigits: 2, maximumFractionDigits: 2 })}`;
-}
+export { formatCents } from './format';
 
 /** "12.5", "$1,200", "7" → cents; null for empty; an error message for anything else. */
 export function parseDollars(text: string): { ok: true; cents: number | null } | { ok: false; error: string } {

@@ -43,7 +43,7 @@ describe('the hits table', () => {
 
   it('when shown on a wide screen, then each hit is a row with its serial, pattern badges, points, strap and fate', () => {
     render(<HitsTable hits={hits} wide showLoggedBy={false} />);
-    const table = screen.getByRole('table', { name: 'Hits, 2 notes' });
+    const table = screen.getByRole('table', { name: 'Finds, 2 notes' });
     expect(within(table).getAllByRole('columnheader').map((cell) => cell.textContent)).toEqual(['Serial', 'Patterns', 'Points', 'Strap', 'Kept', 'When']);
     const [, first, second] = within(table).getAllByRole('row');
     const firstCells = within(first!).getAllByRole('cell').map((cell) => cell.textContent);
@@ -62,7 +62,7 @@ describe('the hits table', () => {
 
   it('when shown on a phone, then each hit is a card in a list with its badges', () => {
     render(<HitsTable hits={hits} wide={false} showLoggedBy />);
-    const list = screen.getByRole('list', { name: 'Hits, 2 notes' });
+    const list = screen.getByRole('list', { name: 'Finds, 2 notes' });
     const items = within(list).getAllByRole('listitem');
     expect(items).toHaveLength(2);
     expect(items[0]!.textContent).toContain('MB 12344321 A');

@@ -116,7 +116,7 @@ describe('the strap sheet editor', () => {
     render(<StrapSheetEditor sheet={sheet} onSave={vi.fn()} canEdit wide />);
     const table = screen.getByRole('table', { name: 'Strap sheet, 3 straps' });
     const headers = within(table).getAllByRole('columnheader').map((cell) => cell.textContent);
-    expect(headers).toEqual(['Strap', 'Searched', 'Pulled', 'Swapped in', 'Short/over', 'Goes back', 'State', 'Note', '']);
+    expect(headers).toEqual(['Strap', 'Searched', 'Pulled', 'Swapped in', 'Short/over', 'Goes back', 'State', 'Note']);
     const rows = within(table).getAllByRole('row');
     expect(rows).toHaveLength(4);
     expect(within(rows[2]!).getAllByRole('cell').map((cell) => cell.textContent).slice(0, 6)).toEqual(['2', '100 / 100', '2', '0', '0', '98']);

@@ -31,10 +31,10 @@ describe('the Sift keypad', () => {
   it('when eight digit keys are pressed, then the serial is typed and Log becomes available', () => {
     const onLog = vi.fn();
     render(<Harness onLog={onLog} />);
-    expect(screen.getByLabelText('Log this note and start the next').getAttribute('aria-disabled')).toBe('true');
+    expect(screen.getByLabelText('Log note and start the next').getAttribute('aria-disabled')).toBe('true');
     for (const digit of '12344321') press(`Digit ${digit}`);
     expect(screen.getByTestId('typed').textContent).toBe('12344321||');
-    press('Log this note and start the next');
+    press('Log note and start the next');
     expect(onLog).toHaveBeenCalledWith('12344321');
   });
 

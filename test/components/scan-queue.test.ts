@@ -1,55 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { ScanQueue, type BatchAnswer, type QueuedScan, type QueueTransport } from '../../src/lib/storage/scan-queue';
 import { ApiError } from '../../src/lib/api/api-error';
-
-function memoryStorage() {
-  const data = new Map<string, string>();
-  return {
-    data,
-    async get<T>(key: string) {
-      const raw = data.get(key);
-      return raw ? (JSON.parse(raw) as T) : null;
-    },
-    async set(key: string, value: unknown) {
-      data.set(key, JSON.stringify(value));
-    },
-  };
-}
-
-/** A server that stores each id once, like the real batch route, and can be switched off. */
-function fakeServer() {
-  const stored = new Set<string>();
-  let online = true;
-  let uploads = 0;
-  const transport: QueueTransport = {
-    async upload(scans: QueuedScan[]): Promise<BatchAnswer> {
-      uploads += 1;
-      if (!online) throw new ApiError(0, 'offline', 'No connection');
-      const answer: BatchAnswer = { stored: [], duplicates: [], rejected: [] };
-      for (const scan of scans) {
-        if (!/^\d{8}$/.test(scan.serial)) answer.rejected.push({ id: scan.id, error: 'not a serial' });
-        else if (stored.has(scan.id)) answer.duplicates.push(scan.id);
-        else {
-          stored.add(scan.id);
-          answer.stored.push(scan.id);
-        }
-      }
-      return answer;
-    },
-    async remove(id: string) {
-      if (!online) throw new ApiError(0, 'offline', 'No connection');
-      stored.delete(id);
-    },
-  };
-  return {
-    transport,
-    stored,
-    setOnline(value: boolean) {
-      online = value;
-    },
-    uploads: () => uploads,
-  };
-}
+import { ScanQueue, type QueuedScan, type QueueTransport } from '../../src/lib/storage/scan-queue';
+import { fakeServer, memoryStorage } from '../support/queue-fakes';
 
 const scan = (n: number, serial = String(10000000 + n)): QueuedScan => ({
   id: `00000000-0000-4000-8000-${String(n).padStart(12, '0')}`,

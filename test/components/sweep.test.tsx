@@ -1,3 +1,4 @@
+import Papa from 'papaparse';
 import { fireEvent, render, screen, within } from '@testing-library/react';
 import { describe, expect, it, vi } from 'vitest';
 import { PATTERN_IDS, parseSerial, sweep, type ParsedSerial } from '@shared/engine';
@@ -87,7 +88,7 @@ describe('the sweep results', () => {
     render(<SweepResults result={result} serial={parsed('11111100')} wide={false} />);
     expect(screen.getByTestId('sweep-headline').textContent).toBe(sweepHeadline(result));
     // 10…19 minus 11 (9), x1 for x ≠ 1 (9), xx for x ≠ 1 (9), and the solid: 28.
-    expect(sweepHeadline(result)).toBe('28 hits in 100 notes, 11111100 to 11111199');
+    expect(sweepHeadline(result)).toBe('28 finds in 100 notes, 11111100 to 11111199');
     const table = screen.getByRole('table');
     const solid = within(table).getAllByRole('row').find((row) => row.textContent?.startsWith('11111111'));
     expect(within(solid!).getAllByRole('cell').map((cell) => cell.textContent)).toEqual(['11111111', '11', 'solid']);
@@ -99,14 +100,22 @@ describe('the sweep results', () => {
     expect(sweepFileName(sweep('00000777', 4000, ['low']))).toBe('strapsift-sweep-00000777-4000.csv');
   });
 
+  it('when the CSV is read back by papaparse, then every find comes back cell for cell, leading zeros kept', () => {
+    const result = sweep('00000001', 1000, ['low', 'solid'], { lowLimit: 99 });
+    const rows = Papa.parse<string[]>(sweepCsv(result, parsed('00000001')), { skipEmptyLines: true }).data;
+    expect(rows).toHaveLength(result.hits.length + 1);
+    expect(rows[1]).toEqual(['00000001', '00000001', '0', '1', '1', 'low serial']);
+    expect(rows.slice(1).map((row) => row[1])).toEqual(result.hits.map((hit) => hit.serial));
+  });
+
   it('when there are more hits than a page, then it pages through them', () => {
     const many = sweep('00000001', 1000, ['low'], { lowLimit: 999 });
     render(<SweepResults result={many} serial={parsed('00000001')} wide />);
-    expect(screen.getByTestId('sweep-page').textContent).toBe('Hits 1–100 of 999');
+    expect(screen.getByTestId('sweep-page').textContent).toBe('Finds 1–100 of 999');
     const firstRows = within(screen.getByRole('table')).getAllByRole('row');
     expect(firstRows).toHaveLength(101);
     fireEvent.click(screen.getByTestId('sweep-next'));
-    expect(screen.getByTestId('sweep-page').textContent).toBe('Hits 101–200 of 999');
+    expect(screen.getByTestId('sweep-page').textContent).toBe('Finds 101–200 of 999');
     const row = within(screen.getByRole('table')).getAllByRole('row')[1]!;
     expect(within(row).getAllByRole('cell').map((cell) => cell.textContent)).toEqual(['00000101', '100', '2 · 1', 'low serial']);
   });

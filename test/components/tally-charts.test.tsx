@@ -71,12 +71,12 @@ describe('the per-pattern chart against chance', () => {
     render(<ChanceSection figures={data} wide={false} testID="chance" />);
     const chart = screen.getByRole('img');
     expect(chart.getAttribute('aria-label')).toBe(
-      'Hits found against hits expected by chance in 4,000 notes. More than chance: binary.',
+      'Finds against the finds expected by chance in 4,000 notes. More than chance: binary.',
     );
     // 100 notes with no finds: the likeliest pattern, trinary, expects 0.7, and P(X = 0) ≈ 0.5: no comparison.
-    expect(chanceSummary(figures(100, {}))).toBe('Hits found against hits expected by chance in 100 notes. Every pattern is about what chance predicts.');
+    expect(chanceSummary(figures(100, {}))).toBe('Finds against the finds expected by chance in 100 notes. Every pattern is about what chance predicts.');
     // 1,000 notes with no trinary where 6.96 are expected: P(X = 0) = e^−6.96 ≈ 0.00095, a picked-over bank.
-    expect(chanceSummary(figures(1000, {}))).toBe('Hits found against hits expected by chance in 1,000 notes. Fewer than chance: trinary.');
+    expect(chanceSummary(figures(1000, {}))).toBe('Finds against the finds expected by chance in 1,000 notes. Fewer than chance: trinary.');
     expect(screen.getByText(EXPECTED_CAVEAT)).toBeTruthy();
     // One row per pattern, each with its found and expected figures printed beside the bars.
     expect(screen.getByText('30 / 27.8')).toBeTruthy();
@@ -103,7 +103,7 @@ describe('the hits-per-1,000 bar chart', () => {
     expect(chart.textContent).toContain('average 6.86');
     const table = within(container).getByRole('table');
     expect(within(table).getAllByRole('row').map((row) => Array.from(row.children).map((cell) => cell.textContent))).toEqual([
-      ['Week', 'Notes', 'Hits', 'Per 1,000'],
+      ['Week', 'Notes', 'Finds', 'Per 1,000'],
       ['Week of Mar 2', '2,000', '18', '9'],
       ['Week of Mar 9', '1,000', '4', '4'],
       ['Week of Mar 16', '4,000', '26', '6.5'],
@@ -112,7 +112,7 @@ describe('the hits-per-1,000 bar chart', () => {
 
   it('when read by a screen reader, then the chart names its highest and lowest rows', () => {
     expect(rateSummary('weeks', rows, 48 / 7)).toBe(
-      'Hits per 1,000 notes for 3 weeks. Highest: Week of Mar 2, 9. Lowest: Week of Mar 9, 4. Average over the period: 6.86.',
+      'Finds per 1,000 notes for 3 weeks. Highest: Week of Mar 2, 9. Lowest: Week of Mar 9, 4. Average over the period: 6.86.',
     );
     render(<RateSection what="weeks" firstHeader="Week" rows={rows} average={48 / 7} wide={false} testID="rate" />);
     expect(screen.getByTestId('rate-chart').getAttribute('aria-label')).toBe(rateSummary('weeks', rows, 48 / 7));

@@ -43,11 +43,9 @@ interface ServerScan {
 
 describe('Sift with the camera (Chromium fake camera)', () => {
   it('when a strap of 100 generated cards passes under the camera, going offline halfway, then the notes read reach the server once each, in order, none misread, with their readings', async () => {
-    const browser = await openBrowser(PHONE, [
-      '--use-fake-ui-for-media-stream',
-      '--use-fake-device-for-media-stream',
-      `--use-file-for-fake-video-capture=${video}`,
-    ]);
+    const browser = await openBrowser(PHONE, {
+      extraArgs: ['--use-fake-ui-for-media-stream', '--use-fake-device-for-media-stream', `--use-file-for-fake-video-capture=${video}`],
+    });
     const { page, context } = browser;
     const title = `Camera strap ${Date.now()}`;
     try {

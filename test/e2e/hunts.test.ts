@@ -66,7 +66,7 @@ describe.each([
       await expect(list.textContent()).resolves.toContain('$1 brick split with Tobiah');
       await shootWhole(page, `test-results/screenshots/hunts-list-${name}.png`);
 
-      await page.getByLabel(/^Open hunt \$1 brick split with Tobiah/).first().click();
+      await page.getByRole('button', { name: /\$1 brick split with Tobiah/ }).first().click();
       await page.waitForURL(/\/hunts\/[0-9a-f-]{36}$/);
       await page.getByTestId('strap-sheet').waitFor();
       await page.getByTestId('hits-table').waitFor();
@@ -188,7 +188,7 @@ describe('Hunts: crew, closing and deleting', () => {
     try {
       await signInAsDemo(page, { email: 'crew@strapsift.test', password: 'crew-demo-2026' });
       await openHuntsTab(page);
-      await page.getByLabel(/^Open hunt \$1 brick split with Tobiah/).click();
+      await page.getByRole('button', { name: /\$1 brick split with Tobiah/ }).first().click();
       await page.getByTestId('manage-section').waitFor();
       await expect(page.getByTestId('manage-section').textContent()).resolves.toContain('You are crew in Wren Halloway');
       await expect(page.getByTestId('delete-hunt').count()).resolves.toBe(0);

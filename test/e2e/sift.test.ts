@@ -113,7 +113,7 @@ describe.each([
 });
 
 describe('Sift paint timing', () => {
-  it('when the eighth digit is pressed 100 times, then the reading paints quickly (figures saved for docs/PERFORMANCE.md)', async () => {
+  it('when the eighth digit is pressed 100 times, then the median paint is within one 16 ms frame (figures saved for docs/PERFORMANCE.md)', async () => {
     const browser = await openBrowser(WIDE);
     const { page } = browser;
     try {
@@ -133,7 +133,9 @@ describe('Sift paint timing', () => {
       const p95 = durations[Math.floor(durations.length * 0.95)];
       writeFileSync('test-results/sift-paint.json', JSON.stringify({ presses: durations.length, medianMs: median, p95Ms: p95 }, null, 2));
       expect(durations).toHaveLength(100);
+      // The budget in docs/PERFORMANCE.md: the reading paints within one 60 Hz frame (16 ms), at the median.
       expect(median).toBeGreaterThan(0);
+      expect(median).toBeLessThanOrEqual(16);
     } finally {
       await browser.close();
     }

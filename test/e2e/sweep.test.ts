@@ -53,9 +53,9 @@ describe.each([
       await page.getByTestId('sweep-run').click();
       await page.getByTestId('sweep-headline').filter({ hasText: '4,000 notes' }).waitFor();
       const brick = sweep('33330000', 4000);
-      await expect(page.getByTestId('sweep-page').textContent()).resolves.toBe(`Hits 1–100 of ${brick.hits.length.toLocaleString('en-US')}`);
+      await expect(page.getByTestId('sweep-page').textContent()).resolves.toBe(`Finds 1–100 of ${brick.hits.length.toLocaleString('en-US')}`);
       await page.getByTestId('sweep-next').click();
-      await expect(page.getByTestId('sweep-page').textContent()).resolves.toBe(`Hits 101–200 of ${brick.hits.length.toLocaleString('en-US')}`);
+      await expect(page.getByTestId('sweep-page').textContent()).resolves.toBe(`Finds 101–200 of ${brick.hits.length.toLocaleString('en-US')}`);
       await expect(page.getByTestId('sweep-table').getByRole('row').nth(1).getByRole('cell').first().textContent()).resolves.toBe(brick.hits[100]!.serial);
       await shootWhole(page, `test-results/screenshots/sweep-brick-${name}.png`);
 

@@ -1,5 +1,6 @@
 import { mkdirSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
+import { apiAs } from '../support/api-client';
 import { PHONE, WIDE, baseUrl, openBrowser, shootWhole, signInAsDemo } from '../support/browser';
 
 mkdirSync('test-results/screenshots', { recursive: true });
@@ -79,13 +80,30 @@ describe.each([
     try {
       await signInAsDemo(page, { email: 'admin@strapsift.test', password: 'console-demo-2026' });
       await page.goto(`${baseUrl()}/console`);
+      // The totals on screen are the server's own figures.
+      const admin = await apiAs('admin@strapsift.test', 'console-demo-2026');
+      const { body: stats } = await admin<{ users: number; scans: number; keepers: number }>('/admin/stats');
+      await page.getByTestId('console-total-users').getByText(stats.users.toLocaleString('en-US'), { exact: true }).waitFor();
+      await expect(page.getByTestId('console-total-scans').textContent()).resolves.toBe(`Notes logged${stats.scans.toLocaleString('en-US')}`);
+      await expect(page.getByTestId('console-total-keepers').textContent()).resolves.toBe(`Keepers${stats.keepers.toLocaleString('en-US')}`);
+
+      // The search narrows the list to the one account, shown with its counts.
       await page.getByTestId('console-search').fill('crew@strapsift');
       const row = page.getByTestId('console-user-crew@strapsift.test');
       await row.waitFor();
+      await page.waitForFunction(() => document.querySelectorAll('[data-testid^="console-user-"]').length === 1);
+      const { body: found } = await admin<{ items: { email: string; hunts: number; keepers: number }[] }>('/admin/users?query=crew%40strapsift');
+      const crew = found.items.find((item) => item.email === 'crew@strapsift.test')!;
+      await expect(row.textContent()).resolves.toContain(`crew@strapsift.test · ${crew.hunts} hunts`);
+      await expect(row.textContent()).resolves.toContain(`${crew.keepers} keepers`);
+
+      // Disabled on screen means disabled on the server: the account cannot sign in until re-enabled.
       await row.getByLabel('Disable crew@strapsift.test').click();
       await row.getByText('disabled').waitFor();
+      await expect(apiAs('crew@strapsift.test', 'crew-demo-2026')).rejects.toThrow(/sign-in failed: 40[13]/);
       await row.getByLabel('Enable crew@strapsift.test').click();
       await row.getByText('active').waitFor();
+      await expect(apiAs('crew@strapsift.test', 'crew-demo-2026')).resolves.toBeTypeOf('function');
       await shootWhole(page, `test-results/screenshots/console-${name}.png`);
     } finally {
       await browser.close();

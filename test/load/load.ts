@@ -11,18 +11,31 @@ import autocannon from 'autocannon';
 import { randomUUID } from 'node:crypto';
 import os from 'node:os';
 import { resolve } from 'node:path';
+import { readFlags, wholeFlag } from '../../scripts/lib/cli-flags';
 import { createDataSource } from '../../server/db/data-source';
 import { ApiProcess } from '../support/fault-rig';
 import { writeDocSection } from '../support/doc-section';
 import { runFaultScenario, type FaultOutcome } from '../support/fault-scenario';
 
 const root = resolve(__dirname, '../..');
-const args = process.argv.slice(2);
-const seconds = Number(args[args.indexOf('--seconds') + 1]) || 20;
-const write = !args.includes('--no-write');
+const USAGE = `usage: npm run load -- [options]
+
+  --seconds N     how long the load run lasts (default 20)
+  --rate R        requests a second per hunter (default 6, so 300 a second)
+  --workers N     app processes behind the port (default 2)
+  --no-faults     skip the fault run (API kills, PostgreSQL restart)
+  --no-write      print the figures only; leave docs/ alone
+  --help          this text`;
+const flags = readFlags(
+  process.argv.slice(2),
+  { seconds: { type: 'string' }, rate: { type: 'string' }, workers: { type: 'string' }, 'no-faults': { type: 'boolean' }, 'no-write': { type: 'boolean' } },
+  USAGE,
+);
+const seconds = wholeFlag(flags.seconds, 20, 'seconds', USAGE);
+const write = !flags['no-write'];
 const HUNTERS = 50;
-const RATE_PER_HUNTER = Number(args[args.indexOf('--rate') + 1]) || 6;
-const WORKERS = Number(args[args.indexOf('--workers') + 1]) || 2;
+const RATE_PER_HUNTER = wholeFlag(flags.rate, 6, 'rate', USAGE);
+const WORKERS = wholeFlag(flags.workers, 2, 'workers', USAGE);
 const PGPORT = Number(process.env.PGPORT ?? 54329);
 const DB = 'strapsift_load';
 
@@ -271,7 +284,7 @@ async function main(): Promise<void> {
   const load = await runLoad();
   console.log(JSON.stringify(load, null, 2));
   let faults: FaultOutcome | null = null;
-  if (!args.includes('--no-faults')) {
+  if (!flags['no-faults']) {
     console.error(`faults: 20 hunters, 10,000 notes, ${WORKERS} app processes, one worker killed twice, PostgreSQL restarted once …`);
     faults = await runFaultScenario({ clients: 20, totalScans: 10_000, apiPort: 8198, pgPort: 54398, workers: WORKERS });
     console.log(JSON.stringify(faults, null, 2));

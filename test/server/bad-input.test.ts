@@ -124,8 +124,12 @@ describe('bad input at every route', () => {
     await api.close();
   });
 
+  /** Per route: cases that reached the app, and refused ones whose "stores nothing" check actually ran. */
+  const exercised = new Map<string, { tried: number; refused: number }>();
+
   it.each(ROUTES)('$method $path: arbitrary bodies, queries and params never give a 5xx, and refused requests store nothing', async (route) => {
     let tried = 0;
+    let refused = 0;
     await fc.assert(
       fc.asyncProperty(body, query, param, param, fc.boolean(), async (payload, search, id, n, useHunt) => {
         tried += 1;
@@ -140,13 +144,23 @@ describe('bad input at every route', () => {
         const response = await call;
         expect(response.status, `${route.method} ${path} → ${response.status} ${JSON.stringify(response.body)}`).toBeLessThan(500);
         if (response.status >= 400) {
+          refused += 1;
           expect(response.body?.error?.code).toEqual(expect.any(String));
           expect(await rowCount()).toBe(before);
         }
       }),
       { numRuns: 25 },
     );
-    expect(tried).toBeGreaterThanOrEqual(25);
+    // Every generated case reached the app (a property that bailed out early would not count 25).
+    expect(tried).toBe(25);
+    exercised.set(`${route.method} ${route.path}`, { tried, refused });
+  });
+
+  it('when the runs above are added up, then every route that takes a body or a parameter refused junk at least once, so the "stores nothing" check ran', () => {
+    const judged = ROUTES.filter((route) => route.method !== 'get' || route.path.includes(':'));
+    const unrefused = judged.map((route) => `${route.method} ${route.path}`).filter((key) => (exercised.get(key)?.refused ?? 0) === 0);
+    expect(exercised.size).toBe(ROUTES.length);
+    expect(unrefused).toEqual([]);
   });
 
   it('when headers are junk (odd content types, broken auth, huge values), then answers stay below 500', async () => {

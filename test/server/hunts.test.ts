@@ -49,7 +49,21 @@ describe('POST /api/hunts', () => {
     const response = await request(api.app).post('/api/hunts').set(owner.auth).send({ title: '', denomination: 3, plannedStraps: 0 });
 
     expect(response.status).toBe(400);
-    expect(Object.keys(response.body.error.fields).sort()).toEqual(['denomination', 'plannedStraps', 'source', 'title']);
+    expect(Object.keys(response.body.error.fields).sort()).toEqual(['denomination', 'plannedStraps', 'title']);
+  });
+
+  it('when no source is given, then the hunt starts with an empty source, so a first hunt is one tap away', async () => {
+    const response = await request(api.app).post('/api/hunts').set(owner.auth).send({ title: 'First hunt', denomination: 1, plannedStraps: 1 });
+
+    expect(response.status).toBe(201);
+    expect(response.body.source).toBe('');
+  });
+
+  it('when the source is longer than 120 characters, then it answers 400 naming the source', async () => {
+    const response = await request(api.app).post('/api/hunts').set(owner.auth).send({ title: 'x', source: 'b'.repeat(121), denomination: 1, plannedStraps: 1 });
+
+    expect(response.status).toBe(400);
+    expect(Object.keys(response.body.error.fields)).toEqual(['source']);
   });
 
   it('when no token is sent, then it answers 401', async () => {

@@ -65,6 +65,8 @@ describe('GET /api/export', () => {
     expect(hunts.status).toBe(200);
     expect(hunts.headers['content-type']).toBe('text/csv; charset=utf-8');
     expect(hunts.headers['content-disposition']).toMatch(/^attachment; filename="strapsift-hunts-\d{4}-\d{2}-\d{2}\.csv"$/);
+    // The people who save the file read "notes", not the API's "scans".
+    expect(scans.headers['content-disposition']).toMatch(/^attachment; filename="strapsift-notes-\d{4}-\d{2}-\d{2}\.csv"$/);
     expect(csvRows(hunts.body as string)).toEqual([expect.objectContaining({ id: hunt.id, title: 'Export week', role: 'owner', notes_you_logged: '2' })]);
     const scanRows = csvRows(scans.body as string);
     expect(scanRows.map((row) => [row.serial, row.strap, row.pulled, row.patterns])).toEqual([

@@ -22,13 +22,17 @@ export interface BrowserSession {
  * Debian's Chromium through playwright-core, with the flags this closed network needs
  * (no background networking, no component updates) and a throwaway profile.
  */
-export async function openBrowser(viewport: { width: number; height: number }, extraArgs: string[] = []): Promise<BrowserSession> {
+export async function openBrowser(
+  viewport: { width: number; height: number },
+  options: { colorScheme?: 'light' | 'dark'; extraArgs?: string[] } = {},
+): Promise<BrowserSession> {
   const profile = mkdtempSync(join(tmpdir(), 'strapsift-chromium-'));
   const context = await chromium.launchPersistentContext(profile, {
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     headless: true,
     viewport,
     deviceScaleFactor: 1,
+    colorScheme: options.colorScheme ?? 'light',
     args: [
       '--headless',
       '--no-sandbox',
@@ -38,7 +42,7 @@ export async function openBrowser(viewport: { width: number; height: number }, e
       '--disable-background-networking',
       '--disable-component-update',
       '--disable-sync',
-      ...extraArgs,
+      ...(options.extraArgs ?? []),
     ],
   });
   const page = context.pages()[0] ?? (await context.newPage());

@@ -2,7 +2,7 @@ import type { DataSource } from 'typeorm';
 import { z } from 'zod';
 import type { AdminStats, AdminUser, AdminUserPage, AdminUserQuery } from '../../../shared/contracts/admin';
 import { containsPattern } from '../../lib/like';
-import { decodeCursor, encodeCursor } from '../../lib/cursor';
+import { afterCursor, decodeCursor, keysetPage } from '../../lib/cursor';
 import { HttpError, notFound } from '../../lib/errors';
 import { int } from '../../lib/patterns';
 import type { UserRole } from '../users/user.entity';
@@ -21,12 +21,9 @@ export class AdminService {
       params.push(containsPattern(query.query));
       where.push(`(u.email ILIKE $${params.length} OR u.display_name ILIKE $${params.length})`);
     }
-    if (after) {
-      params.push(after[0]);
-      where.push(`u.email > $${params.length}`);
-    }
+    if (after) where.push(afterCursor(params, ['u.email'], ['text'], after, 'ASC'));
     params.push(query.limit + 1);
-    const rows: Array<Record<string, unknown>> = await this.dataSource.query(
+    const rows: AdminUserRow[] = await this.dataSource.query(
       `SELECT u.id, u.email, u.display_name, u.role, u.disabled, u.created_at,
               (SELECT count(*) FROM hunts h WHERE h.owner_id = u.id)::int AS hunts,
               (SELECT count(*) FROM scans s WHERE s.user_id = u.id)::int AS scans,
@@ -37,12 +34,8 @@ export class AdminService {
         LIMIT $${params.length}`,
       params,
     );
-    const pageRows = rows.slice(0, query.limit);
-    const last = pageRows[pageRows.length - 1];
-    return {
-      items: pageRows.map(toAdminUser),
-      nextCursor: rows.length > query.limit && last ? encodeCursor([last.email as string]) : null,
-    };
+    const { page, nextCursor } = keysetPage(rows, query.limit, (last) => [last.email]);
+    return { items: page.map(toAdminUser), nextCursor };
   }
 
   /**
@@ -62,7 +55,7 @@ export class AdminService {
       [userId, disabled],
     )) as [Array<{ id: string }>, number];
     if (!updated.length) throw notFound('No such account');
-    const rows: Array<Record<string, unknown>> = await this.dataSource.query(
+    const rows: AdminUserRow[] = await this.dataSource.query(
       `SELECT u.id, u.email, u.display_name, u.role, u.disabled, u.created_at,
               (SELECT count(*) FROM hunts h WHERE h.owner_id = u.id)::int AS hunts,
               (SELECT count(*) FROM scans s WHERE s.user_id = u.id)::int AS scans,
@@ -105,14 +98,27 @@ export class AdminService {
   }
 }
 
-function toAdminUser(row: Record<string, unknown>): AdminUser {
+/** A user row with its counts as PostgreSQL returns them (count(*)::int as number, timestamptz as Date). */
+interface AdminUserRow {
+  id: string;
+  email: string;
+  display_name: string;
+  role: UserRole;
+  disabled: boolean;
+  created_at: Date;
+  hunts: number | string;
+  scans: number | string;
+  keepers: number | string;
+}
+
+function toAdminUser(row: AdminUserRow): AdminUser {
   return {
-    id: row.id as string,
-    email: row.email as string,
-    displayName: row.display_name as string,
-    role: row.role as UserRole,
-    disabled: row.disabled as boolean,
-    createdAt: (row.created_at as Date).toISOString(),
+    id: row.id,
+    email: row.email,
+    displayName: row.display_name,
+    role: row.role,
+    disabled: row.disabled,
+    createdAt: row.created_at.toISOString(),
     hunts: int(row.hunts),
     scans: int(row.scans),
     keepers: int(row.keepers),

@@ -25,7 +25,7 @@ export interface HuntAccess {
  * that does not exist, so ids of other people's hunts reveal nothing.
  */
 export async function huntAccess(db: DataSource | EntityManager, huntId: string, userId: string): Promise<HuntAccess> {
-  const rows: Array<Record<string, unknown>> = await db.query(
+  const rows: HuntAccessRow[] = await db.query(
     `SELECT h.id, h.owner_id, h.title, h.source, h.denomination, h.planned_straps, h.status, h.started_at, h.closed_at, m.role
        FROM hunts h JOIN hunt_members m ON m.hunt_id = h.id AND m.user_id = $2
       WHERE h.id = $1`,
@@ -33,18 +33,36 @@ export async function huntAccess(db: DataSource | EntityManager, huntId: string,
   );
   const row = rows[0];
   if (!row) throw notFound('No such hunt');
+  return toHuntAccess(row);
+}
+
+/** The row as PostgreSQL returns it (timestamptz as Date; the enums as their text). */
+interface HuntAccessRow {
+  id: string;
+  owner_id: string;
+  title: string;
+  source: string;
+  denomination: number;
+  planned_straps: number;
+  status: HuntStatus;
+  started_at: Date;
+  closed_at: Date | null;
+  role: MemberRole;
+}
+
+function toHuntAccess(row: HuntAccessRow): HuntAccess {
   return {
-    role: row.role as MemberRole,
+    role: row.role,
     hunt: {
-      id: row.id as string,
-      ownerId: row.owner_id as string,
-      title: row.title as string,
-      source: row.source as string,
-      denomination: row.denomination as number,
-      plannedStraps: row.planned_straps as number,
-      status: row.status as HuntStatus,
-      startedAt: row.started_at as Date,
-      closedAt: (row.closed_at as Date | null) ?? null,
+      id: row.id,
+      ownerId: row.owner_id,
+      title: row.title,
+      source: row.source,
+      denomination: row.denomination,
+      plannedStraps: row.planned_straps,
+      status: row.status,
+      startedAt: row.started_at,
+      closedAt: row.closed_at ?? null,
     },
   };
 }

@@ -51,18 +51,18 @@ export class HuntSummaryService {
       { text: `Hello ${owner[0]!.display_name}, here is how “${hunt.title}” went.` },
       {
         rows: [
-          ['Source', hunt.source],
+          ['Source', hunt.source || 'not given'],
           ['Denomination', `$${hunt.denomination}`],
           ['Started', day(hunt.startedAt)],
           ['Closed', hunt.status === 'closed' ? day(hunt.closedAt) : 'still open'],
           ['Straps', count(hunt.strapCount)],
           ['Notes searched', count(hunt.notesSearched)],
-          ['Hits', `${count(hunt.hits)} (${figures.perThousand.toFixed(1)} per 1,000)`],
+          ['Finds', `${count(hunt.hits)} (${figures.perThousand.toFixed(1)} per 1,000)`],
           ['Pulled', count(hunt.pulled)],
           ['Crew', hunt.memberCount > 1 ? `${hunt.memberCount - 1} besides you` : 'just you'],
         ],
       },
-      ...(patternRows.length ? [{ text: 'Hits by pattern, against what chance predicts for as many notes:' }, { rows: patternRows }] : []),
+      ...(patternRows.length ? [{ text: 'Finds by pattern, against what chance predicts for as many notes:' }, { rows: patternRows }] : []),
       ...(hits.length
         ? [
             { text: 'Best finds:' },
@@ -73,7 +73,7 @@ export class HuntSummaryService {
               ]),
             },
           ]
-        : [{ text: 'No hits this time.' }]),
+        : [{ text: 'No finds this time.' }]),
       { link: `${this.publicUrl().replace(/\/$/, '')}/hunts/${hunt.id}`, label: 'Open the hunt' },
       { small: figures.caveat },
     ]);

@@ -1,6 +1,6 @@
 import type { DataSource } from 'typeorm';
 import type { BestFind, CreateHuntRequest, HuntDetail, HuntList, HuntListQuery, HuntSummary, UpdateHuntRequest } from '../../../shared/contracts/hunts';
-import { decodeCursor, encodeCursor, timeIdCursor } from '../../lib/cursor';
+import { afterCursor, decodeCursor, keysetPage, timeIdCursor } from '../../lib/cursor';
 import { NON_LOW_MASK, idsOf, int, iso } from '../../lib/patterns';
 import { huntAccess, requireOwner } from '../crew/hunt-access';
 import { HuntMemberEntity, type MemberRole } from '../crew/hunt-member.entity';
@@ -42,10 +42,7 @@ export class HuntsService {
       params.push(query.status);
       where.push(`h.status = $${params.length}`);
     }
-    if (after) {
-      params.push(after[0], after[1]);
-      where.push(`(h.started_at, h.id) < ($${params.length - 1}::timestamptz, $${params.length}::uuid)`);
-    }
+    if (after) where.push(afterCursor(params, ['h.started_at', 'h.id'], ['timestamptz', 'uuid'], after, 'DESC'));
     params.push(query.limit + 1);
     const rows: HuntListRow[] = await this.dataSource.query(
       `SELECT ${HUNT_COLUMNS}
@@ -55,12 +52,8 @@ export class HuntsService {
         LIMIT $${params.length}`,
       params,
     );
-    const pageRows = rows.slice(0, query.limit);
-    const last = pageRows[pageRows.length - 1];
-    return {
-      items: await this.summarise(userId, pageRows),
-      nextCursor: rows.length > query.limit && last ? encodeCursor([last.started_at.toISOString(), last.id]) : null,
-    };
+    const { page, nextCursor } = keysetPage(rows, query.limit, (last) => [last.started_at.toISOString(), last.id]);
+    return { items: await this.summarise(userId, page), nextCursor };
   }
 
   async get(userId: string, huntId: string): Promise<HuntDetail> {

@@ -13,7 +13,7 @@ import type {
 import type { PhotoView } from '../../../shared/contracts/photos';
 import { z } from 'zod';
 import { containsPattern } from '../../lib/like';
-import { assertCursorKind, decodeCursor, encodeCursor } from '../../lib/cursor';
+import { afterCursor, assertCursorKind, decodeCursor, keysetPage } from '../../lib/cursor';
 import { HttpError, notFound } from '../../lib/errors';
 import { idsOf, maskOf } from '../../lib/patterns';
 import type { ReadingContext, WeightsService } from '../weights/weights.service';
@@ -145,29 +145,24 @@ export class KeepersService {
     }
     if (after) {
       assertCursorKind(after[0], sort.kind);
-      const cast = sort.kind === 'time' ? '::timestamptz' : sort.kind === 'number' ? '::float8' : '::text';
-      params.push(after[0], after[1]);
-      const op = sort.dir === 'DESC' ? '<' : '>';
-      where.push(`(${sort.key}, k.id) ${op} ($${params.length - 1}${cast}, $${params.length}::uuid)`);
+      const cast = sort.kind === 'time' ? 'timestamptz' : sort.kind === 'number' ? 'float8' : 'text';
+      where.push(afterCursor(params, [sort.key, 'k.id'], [cast, 'uuid'], after, sort.dir));
     }
     params.push(query.limit + 1);
-    const rows: Array<{ id: string; sort_key: Date | number | string }> = await this.dataSource.query(
+    const rows: Array<{ id: string; sort_key: Date | number | string | null }> = await this.dataSource.query(
       `SELECT k.id, ${sort.key} AS sort_key FROM keepers k
         WHERE ${where.join(' AND ')}
         ORDER BY ${sort.key} ${sort.dir}, k.id ${sort.dir}
         LIMIT $${params.length}`,
       params,
     );
-    const pageRows = rows.slice(0, query.limit);
+    const { page: pageRows, nextCursor } = keysetPage(rows, query.limit, (last) =>
+      last.sort_key === null ? null : [last.sort_key instanceof Date ? last.sort_key.toISOString() : last.sort_key, last.id],
+    );
     const entities = pageRows.length ? await this.keepers().findBy(pageRows.map((row) => ({ id: row.id, userId }))) : [];
     const byId = new Map(entities.map((keeper) => [keeper.id, keeper]));
     const photos = await this.photos.listFor(pageRows.map((row) => row.id));
-    const last = pageRows[pageRows.length - 1];
-    const lastKey = last ? (last.sort_key instanceof Date ? last.sort_key.toISOString() : last.sort_key) : null;
-    return {
-      items: pageRows.map((row) => toSummary(byId.get(row.id)!, photos.get(row.id))),
-      nextCursor: rows.length > query.limit && last && lastKey !== null ? encodeCursor([lastKey, last.id]) : null,
-    };
+    return { items: pageRows.map((row) => toSummary(byId.get(row.id)!, photos.get(row.id))), nextCursor };
   }
 
   async get(userId: string, id: string): Promise<KeeperDetail> {
@@ -200,7 +195,7 @@ export class KeepersService {
         [request.scanId, userId],
       );
       const scan = rows[0];
-      if (!scan) throw notFound('No such scan');
+      if (!scan) throw notFound('No such note');
       const existing = await this.keepers().findOne({ where: { userId, scanId: request.scanId } });
       if (existing) return { keeper: await this.get(userId, existing.id), created: false };
       base = {

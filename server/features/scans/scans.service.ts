@@ -1,7 +1,7 @@
 import type { DataSource } from 'typeorm';
 import { scanInput, type EntryMethod, type RejectedScan, type ScanBatchResponse, type ScanListQuery, type ScanPage } from '../../../shared/contracts/scans';
 import { HttpError, fieldsFromZod, forbidden, notFound } from '../../lib/errors';
-import { decodeCursor, encodeCursor, timeIdCursor } from '../../lib/cursor';
+import { afterCursor, decodeCursor, keysetPage, timeIdCursor } from '../../lib/cursor';
 import { idsOf, maskOf } from '../../lib/patterns';
 import { huntAccess } from '../crew/hunt-access';
 import type { HuntStatus } from '../hunts/hunt.entity';
@@ -32,6 +32,53 @@ function fieldSummary(fields: Record<string, string>): string {
   return Object.entries(fields)
     .map(([field, message]) => `${field} ${message}`)
     .join('; ');
+}
+
+/** A row of the hunt's note list as PostgreSQL returns it (pg gives timestamptz as Date, numeric as text). */
+interface ScanListRow {
+  id: string;
+  hunt_id: string;
+  strap: number;
+  serial: string;
+  digits: string;
+  prefix: string;
+  suffix: string;
+  star: boolean;
+  district: string | null;
+  pulled: boolean;
+  pattern_mask: number;
+  points: string | number;
+  keep: boolean;
+  scanned_at: Date;
+  entry_method: EntryMethod;
+  /** numeric comes back as text. */
+  camera_confidence: string | number | null;
+  star_run_size: number | null;
+  user_id: string;
+  display_name: string;
+}
+
+function toScanItem(row: ScanListRow): ScanPage['items'][number] {
+  return {
+    id: row.id,
+    huntId: row.hunt_id,
+    strap: row.strap,
+    serial: row.serial,
+    digits: row.digits,
+    prefix: row.prefix,
+    suffix: row.suffix,
+    star: row.star,
+    district: row.district ?? null,
+    pulled: row.pulled,
+    patterns: idsOf(row.pattern_mask),
+    points: Number(row.points),
+    keep: row.keep,
+    scannedAt: row.scanned_at.toISOString(),
+    entryMethod: row.entry_method,
+    cameraConfidence: row.camera_confidence === null ? null : Number(row.camera_confidence),
+    starRunSize: row.star_run_size ?? null,
+    loggedBy: { id: row.user_id, displayName: row.display_name },
+  };
 }
 
 export class ScansService {
@@ -178,12 +225,9 @@ export class ScansService {
       params.push(query.strap);
       where.push(`s.strap = $${params.length}`);
     }
-    if (after) {
-      params.push(after[0], after[1]);
-      where.push(`(s.scanned_at, s.id) < ($${params.length - 1}::timestamptz, $${params.length}::uuid)`);
-    }
+    if (after) where.push(afterCursor(params, ['s.scanned_at', 's.id'], ['timestamptz', 'uuid'], after, 'DESC'));
     params.push(query.limit + 1);
-    const rows: Array<Record<string, unknown>> = await this.dataSource.query(
+    const rows: ScanListRow[] = await this.dataSource.query(
       `SELECT s.id, s.hunt_id, s.strap, s.serial, s.digits, s.prefix, s.suffix, s.star, s.district, s.pulled,
               s.pattern_mask, s.points, s.keep, s.scanned_at, s.entry_method, s.camera_confidence, s.star_run_size,
               s.user_id, u.display_name
@@ -193,31 +237,8 @@ export class ScansService {
         LIMIT $${params.length}`,
       params,
     );
-    const pageRows = rows.slice(0, query.limit);
-    const last = pageRows[pageRows.length - 1];
-    return {
-      items: pageRows.map((row) => ({
-        id: row.id as string,
-        huntId: row.hunt_id as string,
-        strap: row.strap as number,
-        serial: row.serial as string,
-        digits: row.digits as string,
-        prefix: row.prefix as string,
-        suffix: row.suffix as string,
-        star: row.star as boolean,
-        district: (row.district as string | null) ?? null,
-        pulled: row.pulled as boolean,
-        patterns: idsOf(row.pattern_mask as number),
-        points: Number(row.points),
-        keep: row.keep as boolean,
-        scannedAt: (row.scanned_at as Date).toISOString(),
-        entryMethod: row.entry_method as EntryMethod,
-        cameraConfidence: row.camera_confidence === null ? null : Number(row.camera_confidence),
-        starRunSize: (row.star_run_size as number | null) ?? null,
-        loggedBy: { id: row.user_id as string, displayName: row.display_name as string },
-      })),
-      nextCursor: rows.length > query.limit && last ? encodeCursor([(last.scanned_at as Date).toISOString(), last.id as string]) : null,
-    };
+    const { page, nextCursor } = keysetPage(rows, query.limit, (last) => [last.scanned_at.toISOString(), last.id]);
+    return { items: page.map(toScanItem), nextCursor };
   }
 
   /**
@@ -227,9 +248,9 @@ export class ScansService {
   async remove(userId: string, scanId: string): Promise<void> {
     const rows: Array<{ hunt_id: string; user_id: string }> = await this.dataSource.query(`SELECT hunt_id, user_id FROM scans WHERE id = $1`, [scanId]);
     const scan = rows[0];
-    if (!scan) throw notFound('No such scan');
+    if (!scan) throw notFound('No such note');
     const access = await huntAccess(this.dataSource, scan.hunt_id, userId).catch((error: unknown) => {
-      throw error instanceof HttpError && error.status === 404 ? notFound('No such scan') : error;
+      throw error instanceof HttpError && error.status === 404 ? notFound('No such note') : error;
     });
     if (scan.user_id !== userId && access.role !== 'owner') {
       throw forbidden('Only the one who logged this note or the hunt’s owner may delete it');

@@ -1,6 +1,6 @@
 import type { DataSource } from 'typeorm';
 import type { StrapRow, StrapSheet, UpdateStrapRequest } from '../../../shared/contracts/straps';
-import { NOTES_PER_STRAP } from '../../../shared/trade';
+import { strapFigures } from '../../../shared/straps';
 import { int, iso } from '../../lib/patterns';
 import { huntAccess } from '../crew/hunt-access';
 
@@ -22,8 +22,7 @@ function strapRow(number: number, counts: ScanCounts | undefined, recorded: Reco
   const pulled = counts?.pulled ?? 0;
   const swappedIn = recorded?.swappedIn ?? 0;
   const shortOver = recorded?.shortOver ?? 0;
-  const received = NOTES_PER_STRAP + shortOver;
-  const notesBack = received - pulled + swappedIn;
+  const { received, notesBack, complete } = strapFigures({ pulled, swappedIn, shortOver });
   return {
     number,
     searched,
@@ -32,7 +31,7 @@ function strapRow(number: number, counts: ScanCounts | undefined, recorded: Reco
     shortOver,
     received,
     notesBack,
-    complete: notesBack === NOTES_PER_STRAP,
+    complete,
     fullySearched: searched >= received,
     note: recorded?.note ?? null,
     firstScanAt: iso(counts?.first),

@@ -161,7 +161,7 @@ export class ExportService {
     const columns = CSV_COLUMNS[kind];
     res.status(200);
     res.setHeader('Content-Type', 'text/csv; charset=utf-8');
-    res.setHeader('Content-Disposition', `attachment; filename="strapsift-${kind}-${new Date().toISOString().slice(0, 10)}.csv"`);
+    res.setHeader('Content-Disposition', `attachment; filename="strapsift-${kind === 'scans' ? 'notes' : kind}-${new Date().toISOString().slice(0, 10)}.csv"`);
     res.setHeader('Cache-Control', 'no-store');
     await write(res, `${Papa.unparse([columns], { newline: '\r\n' })}\r\n`);
     for await (const rows of this.pages(kind, userId)) {

@@ -1,14 +1,14 @@
 import type { DataSource, EntityManager } from 'typeorm';
+import { v5 as uuidV5 } from 'uuid';
 import type { ImportRow, ImportRowsRequest, ImportRowsResponse } from '../../../shared/contracts/transfer';
 import { parseSerial } from '../../../shared/engine';
 import { HttpError } from '../../lib/errors';
-import { uuidV5 } from '../../lib/uuid-v5';
 import { huntAccess } from '../crew/hunt-access';
 import type { KeepersService } from '../keepers/keepers.service';
 import type { ScansService } from '../scans/scans.service';
 
 /** Namespace of imported notes' ids (a fixed random UUID; changing it would make old imports import again). */
-const IMPORT_NAMESPACE = '6f1d7c2e-3b5a-4f0e-9a61-2c8d4e7b9f13';
+export const IMPORT_NAMESPACE = '6f1d7c2e-3b5a-4f0e-9a61-2c8d4e7b9f13';
 
 /** Notes without a strap column go 100 to a strap in file order, as they came out of the straps. */
 const strapOfLine = (line: number) => Math.min(1000, Math.floor((line - 2) / 100) + 1);

@@ -58,7 +58,8 @@ export function AppTabBar({ state, navigation }: BottomTabBarProps) {
   if (isWide) {
     return (
       <View
-        accessibilityRole="tablist"
+        role="navigation"
+        aria-label="Main"
         testID="side-rail"
         style={[styles.rail, { backgroundColor: theme.surfaceRaised, borderRightColor: theme.line }]}
       >
@@ -70,23 +71,29 @@ export function AppTabBar({ state, navigation }: BottomTabBarProps) {
             Strapsift
           </Text>
         </View>
-        <View style={styles.railItems}>{items}</View>
+        <View role="tablist" style={styles.railItems}>
+          {items}
+        </View>
       </View>
     );
   }
   return (
     <View
-      accessibilityRole="tablist"
+      role="navigation"
+      aria-label="Main"
       testID="tab-bar"
       style={[styles.bar, { backgroundColor: theme.surfaceRaised, borderTopColor: theme.line, paddingBottom: Math.max(insets.bottom, space.xs) }]}
     >
-      {items}
+      <View role="tablist" style={styles.barItems}>
+        {items}
+      </View>
     </View>
   );
 }
 
 const styles = StyleSheet.create({
-  bar: { flexDirection: 'row', borderTopWidth: 1, paddingTop: space.xs },
+  bar: { borderTopWidth: 1, paddingTop: space.xs },
+  barItems: { flexDirection: 'row' },
   barItem: { flex: 1, alignItems: 'center', justifyContent: 'center', gap: 2, minHeight: 56, position: 'relative' },
   barMarker: { position: 'absolute', top: -space.xs, height: 3, width: 32, borderRadius: 2 },
   focusedLabel: { fontWeight: '700' },

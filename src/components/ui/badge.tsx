@@ -3,7 +3,7 @@ import { useTheme } from '../../theme/theme-provider';
 import { radius, space } from '../../theme/tokens';
 import { Text } from './text';
 
-type Tone = 'hit' | 'near' | 'neutral' | 'ok';
+type Tone = 'hit' | 'near' | 'neutral' | 'ok' | 'warn' | 'danger';
 
 /** A pill naming a pattern or a state; the accessible label reads the same as the text. */
 export function Badge({ label, tone = 'neutral', accessibilityLabel }: { label: string; tone?: Tone; accessibilityLabel?: string }) {
@@ -13,6 +13,8 @@ export function Badge({ label, tone = 'neutral', accessibilityLabel }: { label: 
     near: { bg: theme.nearSoft, fg: theme.near, border: theme.near },
     neutral: { bg: theme.surfaceSunken, fg: theme.inkMuted, border: theme.line },
     ok: { bg: theme.surfaceSunken, fg: theme.ok, border: theme.ok },
+    warn: { bg: theme.surfaceSunken, fg: theme.warn, border: theme.warn },
+    danger: { bg: theme.surfaceSunken, fg: theme.danger, border: theme.danger },
   }[tone];
   return (
     <View

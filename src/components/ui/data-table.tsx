@@ -45,7 +45,8 @@ export function DataTable<T>({ label, columns, rows, rowKey, empty, minWidth, te
     <View role="table" aria-label={label} testID={testID} style={[styles.table, minWidth ? { minWidth } : null, { borderColor: theme.line }]}>
       <View role="row" style={[styles.row, styles.headRow, { borderBottomColor: theme.line, backgroundColor: theme.surfaceSunken }]}>
         {columns.map((column) => (
-          <View key={column.key} role="columnheader" style={[styles.cell, sizing(column), justify(column)]}>
+          // An action column has no heading; an empty header cell would announce nothing, so it is a plain cell.
+          <View key={column.key} role={column.header ? 'columnheader' : 'cell'} style={[styles.cell, sizing(column), justify(column)]}>
             <Text variant="label" tone="muted" style={column.align === 'right' ? styles.textRight : null}>
               {column.header}
             </Text>

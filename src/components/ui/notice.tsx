@@ -11,7 +11,8 @@ export function Notice({ tone = 'info', title, children }: { tone?: Tone; title?
   const color = { info: theme.near, caution: theme.warn, error: theme.danger, ok: theme.ok }[tone];
   return (
     <View
-      accessibilityRole={tone === 'error' ? 'alert' : 'summary'}
+      // "note" is ARIA's role for an aside like this; an unnamed region would be an empty landmark.
+      role={tone === 'error' ? 'alert' : 'note'}
       style={[styles.box, { borderLeftColor: color, backgroundColor: theme.surfaceSunken }]}
     >
       {title ? (

@@ -3,6 +3,7 @@ import { ScrollView, StyleSheet, View } from 'react-native';
 import { useTheme } from '../../theme/theme-provider';
 import { useLayout } from '../../theme/use-layout';
 import { space } from '../../theme/tokens';
+import { PageHeading } from './page-heading';
 import { Text } from './text';
 
 interface ScreenProps {
@@ -23,9 +24,7 @@ export function Screen({ title, subtitle, actions, children, scroll = true, maxW
     <View style={[styles.column, { maxWidth, paddingHorizontal: isWide ? space.xxl : space.lg }]}>
       <View style={styles.header}>
         <View style={styles.headerText}>
-          <Text variant="title" accessibilityRole="header">
-            {title}
-          </Text>
+          <PageHeading>{title}</PageHeading>
           {subtitle ? <Text tone="muted">{subtitle}</Text> : null}
         </View>
         {actions ? <View style={styles.actions}>{actions}</View> : null}
@@ -34,7 +33,7 @@ export function Screen({ title, subtitle, actions, children, scroll = true, maxW
     </View>
   );
   return (
-    <View style={[styles.root, { backgroundColor: theme.surface }]}>
+    <View role="main" style={[styles.root, { backgroundColor: theme.surface }]}>
       {scroll ? <ScrollView contentContainerStyle={styles.scroll}>{body}</ScrollView> : body}
     </View>
   );

@@ -1,15 +1,16 @@
 import type { ReactNode } from 'react';
 import { KeyboardAvoidingView, ScrollView, StyleSheet, View } from 'react-native';
 import { Link } from 'expo-router';
+import { PageHeading } from '@/components/ui/page-heading';
 import { Text } from '@/components/ui/text';
 import { useTheme } from '@/theme/theme-provider';
-import { fonts, radius, space } from '@/theme/tokens';
+import { fonts, fontSize, radius, space } from '@/theme/tokens';
 
 /** The signed-out pages share one calm card with the name and the job in a line. */
 export function AuthFrame({ title, children, footer }: { title: string; children: ReactNode; footer?: { text: string; href: string; link: string }[] }) {
   const theme = useTheme();
   return (
-    <KeyboardAvoidingView style={[styles.root, { backgroundColor: theme.surface }]} behavior="padding">
+    <KeyboardAvoidingView role="main" style={[styles.root, { backgroundColor: theme.surface }]} behavior="padding">
       <ScrollView contentContainerStyle={styles.scroll} keyboardShouldPersistTaps="handled">
         <View style={styles.column}>
           <View style={styles.brand}>
@@ -22,9 +23,7 @@ export function AuthFrame({ title, children, footer }: { title: string; children
             </View>
           </View>
           <View style={[styles.card, { backgroundColor: theme.surfaceRaised, borderColor: theme.line }]}>
-            <Text variant="heading" accessibilityRole="header">
-              {title}
-            </Text>
+            <PageHeading style={styles.cardTitle}>{title}</PageHeading>
             {children}
           </View>
           {footer?.map((item) => (
@@ -50,4 +49,5 @@ const styles = StyleSheet.create({
   markText: { fontFamily: fonts.monoBold, fontSize: 26 },
   card: { borderWidth: 1, borderRadius: radius.lg, padding: space.xl, gap: space.lg },
   footer: { textAlign: 'center' },
+  cardTitle: { fontSize: fontSize.lg, fontWeight: '600', letterSpacing: 0 },
 });

@@ -15,6 +15,7 @@ import { useTheme } from '@/theme/theme-provider';
 import { useLayout } from '@/theme/use-layout';
 import { fonts, space } from '@/theme/tokens';
 import { setUserDisabled, useAdminStats, useAdminUsers } from './api';
+import { formatCount } from '@/lib/format';
 
 const TOTALS: { key: keyof AdminStats; label: string }[] = [
   { key: 'users', label: 'Accounts' },
@@ -43,11 +44,11 @@ export function ConsoleScreen() {
     <Screen title="Console" subtitle="Accounts and system totals. Admins only.">
       <View style={styles.totals}>
         {TOTALS.map((total) => (
-          <Card key={total.key} style={styles.total}>
+          <Card key={total.key} style={styles.total} testID={`console-total-${total.key}`}>
             <Text variant="caption" tone="muted">
               {total.label}
             </Text>
-            <Text style={styles.totalNumber}>{stats.data ? stats.data[total.key].toLocaleString('en-US') : '…'}</Text>
+            <Text style={styles.totalNumber}>{stats.data ? formatCount(stats.data[total.key]) : '…'}</Text>
           </Card>
         ))}
       </View>
@@ -60,7 +61,7 @@ export function ConsoleScreen() {
             <View style={styles.userText}>
               <Text bold>{account.displayName}</Text>
               <Text variant="caption" tone="muted">
-                {account.email} · {account.hunts} hunts · {account.scans.toLocaleString('en-US')} notes · {account.keepers} keepers
+                {account.email} · {account.hunts} hunts · {formatCount(account.scans)} notes · {account.keepers} keepers
               </Text>
             </View>
             <View style={styles.userActions}>

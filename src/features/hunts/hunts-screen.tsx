@@ -37,8 +37,8 @@ export function HuntsScreen() {
       subtitle="Every session you sifted, strap by strap."
       actions={
         <>
-          <Button kind="secondary" label="Tally" accessibilityLabel="Open the Tally: hit rates against chance" onPress={() => router.push('/tally')} testID="open-tally" />
-          <Button kind="secondary" label="Sweep" accessibilityLabel="Open Sweep: list the hits in a run of new notes" onPress={() => router.push('/sweep')} testID="open-sweep" />
+          <Button kind="secondary" label="Tally" accessibilityLabel="Open the Tally: find rates against chance" onPress={() => router.push('/tally')} testID="open-tally" />
+          <Button kind="secondary" label="Sweep" accessibilityLabel="Open Sweep: list the finds in a run of new notes" onPress={() => router.push('/sweep')} testID="open-sweep" />
         </>
       }
     >

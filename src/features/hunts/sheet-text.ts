@@ -1,5 +1,6 @@
 import type { StrapRow, StrapSheet } from '@shared/contracts';
 import { isTouched } from './strap-draft';
+import { caption, formatDate } from '@/lib/format';
 
 /**
  * The straps a teller gets back: those the hunter opened or recorded. A sheet printed before any
@@ -18,7 +19,7 @@ export function sheetText(sheet: StrapSheet, startedAt: string): string {
   const straps = printedStraps(sheet);
   const lines = [
     `Strap sheet · ${sheet.title}`,
-    `${sheet.source} · $${sheet.denomination} notes · ${new Date(startedAt).toLocaleDateString('en-US', { month: 'short', day: 'numeric', year: 'numeric' })}`,
+    caption(sheet.source, `$${sheet.denomination} notes`, formatDate(startedAt, 'medium')),
     '',
     'Strap  Received  Pulled  Swapped in  Goes back',
     ...straps.map((row) =>

@@ -1,5 +1,6 @@
 import { updateStrapRequest, type StrapRow, type UpdateStrapRequest } from '@shared/contracts';
-import { NOTES_PER_STRAP } from '@shared/trade';
+import { flatFieldErrors } from '@shared/contracts/field-errors';
+import { balanceOf, isTouched, strapFigures, type StrapBalance, type StrapFigures } from '@shared/straps';
 
 /** What the strap editor holds while the hunter types: text, so a half-typed "−" is never lost. */
 export interface StrapDraft {
@@ -40,35 +41,34 @@ export function parseStrapDraft(draft: StrapDraft): DraftResult {
   };
   const parsed = updateStrapRequest.safeParse(body);
   if (parsed.success) return { ok: true, body: parsed.data };
+  const { swappedIn, shortOver, note } = flatFieldErrors(parsed.error);
   const errors: Partial<Record<StrapDraftField, string>> = {};
-  for (const issue of parsed.error.issues) {
-    const field = issue.path[0];
-    if ((field === 'swappedIn' || field === 'shortOver' || field === 'note') && !errors[field]) errors[field] = issue.message;
-  }
+  if (swappedIn) errors.swappedIn = swappedIn;
+  if (shortOver) errors.shortOver = shortOver;
+  if (note) errors.note = note;
   return { ok: false, errors };
 }
 
 /** What the strap would go back with if the draft were saved; null while a number is unreadable. */
-export function previewBack(row: Pick<StrapRow, 'pulled'>, draft: StrapDraft): { received: number; notesBack: number; complete: boolean } | null {
+export function previewBack(row: Pick<StrapRow, 'pulled'>, draft: StrapDraft): StrapFigures | null {
   const swappedIn = readWhole(draft.swappedIn);
   const shortOver = readWhole(draft.shortOver);
   if (Number.isNaN(swappedIn) || Number.isNaN(shortOver)) return null;
-  const received = NOTES_PER_STRAP + shortOver;
-  const notesBack = received - row.pulled + swappedIn;
-  return { received, notesBack, complete: notesBack === NOTES_PER_STRAP };
+  return strapFigures({ pulled: row.pulled, swappedIn, shortOver });
 }
 
-export type StrapState = { tone: 'ok' | 'hit' | 'near' | 'neutral'; label: string };
+export type StrapTone = 'ok' | 'warn' | 'danger' | 'neutral';
 
-/** One word for the strap's state, as the sheet shows it: complete, 2 short, 1 over, not started. */
-export function strapState(row: StrapRow): StrapState {
-  const touched = row.searched > 0 || row.swappedIn > 0 || row.shortOver !== 0 || row.pulled > 0;
-  if (!touched) return { tone: 'neutral', label: 'not started' };
-  if (row.notesBack < NOTES_PER_STRAP) return { tone: 'hit', label: `${NOTES_PER_STRAP - row.notesBack} short` };
-  if (row.notesBack > NOTES_PER_STRAP) return { tone: 'near', label: `${row.notesBack - NOTES_PER_STRAP} over` };
-  return { tone: 'ok', label: 'complete' };
+/**
+ * The colour of a strap's balance: short is danger (notes missing from the bank's cash), over is a
+ * warning; never the find accent, which marks patterns.
+ */
+export const BALANCE_TONE: Record<StrapBalance, StrapTone> = { 'not started': 'neutral', complete: 'ok', short: 'danger', over: 'warn' };
+
+/** The preview line's colour: a strap being squared is never "not started". */
+export function previewTone(notesBack: number): Exclude<StrapTone, 'neutral'> {
+  const balance = balanceOf(notesBack).balance;
+  return balance === 'short' ? 'danger' : balance === 'over' ? 'warn' : 'ok';
 }
 
-export function isTouched(row: StrapRow): boolean {
-  return row.searched > 0 || row.swappedIn > 0 || row.shortOver !== 0 || row.pulled > 0 || !!row.note;
-}
+export { isTouched };

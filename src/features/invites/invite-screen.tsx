@@ -9,8 +9,9 @@ import { useSession } from '@/lib/session/session-provider';
 import { revalidateHunts } from '../hunts/api';
 import { AuthFrame } from '../auth/auth-frame';
 import { acceptInvite, useInvitePreview } from './api';
+import { formatDate } from '@/lib/format';
 
-const formatDate = (iso: string) => new Date(iso).toLocaleDateString('en-US', { year: 'numeric', month: 'short', day: 'numeric' });
+const mediumDate = (iso: string) => formatDate(iso, 'medium');
 
 /**
  * Where an invitation mail leads. Signed out, it says what the invitation is and sends the visitor to
@@ -48,7 +49,7 @@ export function InviteScreen() {
             sheet add up.
           </Text>
           <Text variant="caption" tone="muted">
-            Sent to {invite.email} · works until {formatDate(invite.expiresAt)}
+            Sent to {invite.email} · works until {mediumDate(invite.expiresAt)}
           </Text>
           {invite.status === 'accepted' ? <Notice tone="info">This invitation was already accepted.</Notice> : null}
           {invite.status === 'expired' ? <Notice tone="caution">This invitation has expired; ask the owner for a new one.</Notice> : null}

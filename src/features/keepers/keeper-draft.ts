@@ -1,6 +1,7 @@
 import { updateKeeperRequest, type KeeperStatus, type KeeperSummary, type UpdateKeeperRequest } from '@shared/contracts';
 import { parseSerial } from '@shared/engine';
 import { centsToInput, parseDollars } from '@/lib/money';
+import { flatFieldErrors } from '@shared/contracts/field-errors';
 
 /** What the keeper form holds: text as typed, so nothing half-entered is lost on a failed save. */
 export interface KeeperDraft {
@@ -79,7 +80,7 @@ export function checkKeeperDraft(draft: KeeperDraft): DraftCheck {
     notes: draft.notes.trim() || null,
   };
   const parsed = updateKeeperRequest.safeParse(candidate);
-  if (!parsed.success) for (const issue of parsed.error.issues) fields[issue.path.join('.')] ??= issue.message;
+  if (!parsed.success) for (const [field, message] of Object.entries(flatFieldErrors(parsed.error))) fields[field] ??= message;
   if (Object.keys(fields).length || !parsed.success) return { ok: false, fields };
   return { ok: true, body: { ...parsed.data, serial: candidate.serial } };
 }

@@ -97,7 +97,7 @@ export function KeeperScreen() {
         </Text>
         {confirmDelete ? (
           <>
-            <Text>Delete {keeperTitle(keeper)} from your keepers? The logged scan stays in its hunt.</Text>
+            <Text>Delete {keeperTitle(keeper)} from your keepers? The logged note stays in its hunt.</Text>
             <View style={styles.actions}>
               <Button kind="danger" label="Yes, delete it" busy={remove.busy} onPress={() => void remove.submit()} testID="confirm-delete-keeper" />
               <Button kind="secondary" label="Keep it" onPress={() => setConfirmDelete(false)} />

@@ -1,4 +1,4 @@
-import { useEffect, useMemo, useState } from 'react';
+import { useMemo, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { router } from 'expo-router';
 import useSWRInfinite from 'swr/infinite';
@@ -15,6 +15,7 @@ import { useLayout } from '@/theme/use-layout';
 import { space } from '@/theme/tokens';
 import { keeperKeys } from './api';
 import { KeeperCard } from './components/keeper-card';
+import { useDebounced } from '@/lib/use-debounced';
 
 const SORTS: { value: KeeperSort; label: string }[] = [
   { value: 'newest', label: 'Newest' },
@@ -49,15 +50,6 @@ const PATTERN_FILTERS: { value: '' | PatternId | 'star'; label: string }[] = [
   { value: 'star', label: '★ star' },
   ...PATTERN_IDS.map((id) => ({ value: id, label: PATTERN_NAMES[id] })),
 ];
-
-function useDebounced<T>(value: T, ms: number): T {
-  const [debounced, setDebounced] = useState(value);
-  useEffect(() => {
-    const timer = setTimeout(() => setDebounced(value), ms);
-    return () => clearTimeout(timer);
-  }, [value, ms]);
-  return debounced;
-}
 
 export function KeepersScreen() {
   const { isWide } = useLayout();

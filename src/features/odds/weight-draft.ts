@@ -1,5 +1,6 @@
 import { weightTableValues, type WeightTableValues } from '@shared/contracts';
 import { PATTERN_IDS, type LowLimit, type PatternId } from '@shared/engine';
+import { nestedFieldErrors } from '@shared/contracts/field-errors';
 
 /**
  * The weight editor works on text (what the fields hold) so a half-typed "-" or "2." is never lost;
@@ -60,7 +61,5 @@ export function draftToTable(draft: WeightDraft): DraftResult {
   };
   const parsed = weightTableValues.safeParse(candidate);
   if (parsed.success) return { ok: true, table: parsed.data };
-  const fields: Record<string, string> = {};
-  for (const issue of parsed.error.issues) fields[issue.path.join('.')] ??= issue.message;
-  return { ok: false, fields };
+  return { ok: false, fields: nestedFieldErrors(parsed.error) };
 }

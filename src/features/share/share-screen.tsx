@@ -4,12 +4,13 @@ import type { SharedKeeper } from '@shared/contracts';
 import { districtByLetter, gradeBand } from '@shared/trade';
 import { Badge } from '@/components/ui/badge';
 import { Notice } from '@/components/ui/notice';
+import { PageHeading } from '@/components/ui/page-heading';
 import { Text } from '@/components/ui/text';
 import { ApiError, absoluteApiUrl } from '@/lib/api/client';
 import { useTheme } from '@/theme/theme-provider';
 import { useLayout } from '@/theme/use-layout';
-import { fonts, radius, space } from '@/theme/tokens';
-import { oneInText } from '../sift/reading-view';
+import { fonts, fontSize, radius, space } from '@/theme/tokens';
+import { formatOneIn } from '@/lib/format';
 import { useSharedKeeper } from './api';
 
 /** "65 (Gem Uncirculated)": the band, so a 65 is not read as a plain Unc. */
@@ -58,13 +59,13 @@ export function ShareScreen() {
 
   return (
     <ScrollView style={{ backgroundColor: theme.surface }} contentContainerStyle={styles.scroll}>
-      <View style={[styles.column, { maxWidth: isWide ? 880 : 520 }]}>
+      <View role="main" style={[styles.column, { maxWidth: isWide ? 880 : 520 }]}>
         <View style={styles.brand}>
           <View style={[styles.mark, { backgroundColor: theme.brand }]}>
             <Text style={[styles.markText, { color: theme.onBrand }]}>S</Text>
           </View>
           <View style={styles.brandText}>
-            <Text variant="heading">A note shared from Strapsift</Text>
+            <PageHeading style={styles.pageTitle}>A note shared from Strapsift</PageHeading>
             <Text tone="muted">A collector&apos;s find, shown read-only.</Text>
           </View>
         </View>
@@ -80,13 +81,13 @@ export function ShareScreen() {
 
         {keeper ? (
           <View style={[styles.card, { backgroundColor: theme.surfaceRaised, borderColor: theme.line }]} testID="shared-keeper">
-            <Text accessibilityRole="header" style={[styles.serial, { color: keeper.patterns.length ? theme.hit : theme.ink }]} testID="shared-serial">
+            <Text role="heading" aria-level={2} style={[styles.serial, { color: keeper.patterns.length ? theme.hit : theme.ink }]} testID="shared-serial">
               {title}
             </Text>
             <View style={styles.badges}>
               {keeper.patterns.length ? (
                 keeper.patterns.map((pattern) => (
-                  <Badge key={pattern.id} label={`${pattern.name} · ${oneInText(pattern.oneIn ?? Infinity)}`} tone="hit" accessibilityLabel={`Pattern: ${pattern.name}`} />
+                  <Badge key={pattern.id} label={`${pattern.name} · ${formatOneIn(pattern.oneIn ?? Infinity)}`} tone="hit" accessibilityLabel={`Pattern: ${pattern.name}`} />
                 ))
               ) : (
                 <Badge label="no pattern" />
@@ -133,6 +134,7 @@ const styles = StyleSheet.create({
   column: { width: '100%', alignSelf: 'center', gap: space.lg },
   brand: { flexDirection: 'row', alignItems: 'center', gap: space.md },
   brandText: { flexShrink: 1 },
+  pageTitle: { fontSize: fontSize.lg, fontWeight: '600', letterSpacing: 0 },
   mark: { width: 44, height: 44, borderRadius: radius.md, alignItems: 'center', justifyContent: 'center' },
   markText: { fontFamily: fonts.monoBold, fontSize: 24 },
   card: { borderWidth: 1, borderRadius: radius.lg, padding: space.xl, gap: space.lg },

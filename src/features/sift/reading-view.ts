@@ -7,6 +7,7 @@ import {
   type Reading,
   type WeightTable,
 } from '@shared/engine';
+import { countOf } from '@/lib/format';
 
 export interface NearMissLine {
   key: string;
@@ -39,7 +40,7 @@ export function nearMissLines(reading: Reading, maxDistance = 2): NearMissLine[]
   return lines.sort((a, b) => a.distance - b.distance);
 }
 
-const plural = (n: number) => `${n.toLocaleString('en-US')} note${n === 1 ? '' : 's'}`;
+const plural = (n: number) => countOf(n, 'note');
 
 /**
  * The nearest members of the patterns the hunter gives weight to, closest first:
@@ -54,11 +55,4 @@ export function neighbourLines(reading: Reading, weights: WeightTable, limit = 4
     if (below) lines.push({ key: `${id}-below`, text: `last ${PATTERN_NAMES[id]} ${plural(below.notesAway)} back`, notesAway: below.notesAway, serial: below.serial });
   }
   return lines.sort((a, b) => a.notesAway - b.notesAway).slice(0, limit);
-}
-
-/** "1 in 8,749" with a sensible rounding for very rare combinations. */
-export function oneInText(oneIn: number): string {
-  if (!Number.isFinite(oneIn)) return 'never';
-  if (oneIn < 10) return `1 in ${oneIn.toFixed(1)}`;
-  return `1 in ${Math.round(oneIn).toLocaleString('en-US')}`;
 }

@@ -6,6 +6,7 @@ import { districtByLetter } from '@shared/trade';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
+import { PageHeading } from '@/components/ui/page-heading';
 import { Text } from '@/components/ui/text';
 import { uuid } from '@/lib/uuid';
 import { useScanQueue } from '@/lib/storage/use-scan-queue';
@@ -213,15 +214,13 @@ export function SiftScreen() {
     !!session.hunt && !choosing,
   );
 
-  if (!session.loaded) return <View style={[styles.root, { backgroundColor: theme.surface }]} />;
+  if (!session.loaded) return <View role="main" style={[styles.root, { backgroundColor: theme.surface }]} />;
 
   if (!session.hunt || choosing) {
     return (
-      <View style={[styles.root, { backgroundColor: theme.surface }]}>
+      <View role="main" style={[styles.root, { backgroundColor: theme.surface }]}>
         <ScrollView contentContainerStyle={[styles.chooser, isWide && styles.chooserWide]}>
-          <Text variant="title" accessibilityRole="header">
-            Sift
-          </Text>
+          <PageHeading>Sift</PageHeading>
           <Text tone="muted">Pick the hunt these notes belong to. Every note is saved on this device first, then sent.</Text>
           <HuntChooser
             onChosen={(hunt) => {
@@ -253,6 +252,7 @@ export function SiftScreen() {
   const cameraLogged = source.method === 'camera' && source.logged;
   const header = (
     <View style={styles.header}>
+      <PageHeading hidden>{`Sift: ${session.hunt.title}`}</PageHeading>
       <View style={styles.headerTop}>
         <Button compact kind="quiet" label={`${session.hunt.title} ▾`} accessibilityLabel={`Hunt: ${session.hunt.title}. Switch hunt`} onPress={() => setChoosing(true)} testID="switch-hunt" />
         <SyncBadge snapshot={snapshot} onRetry={() => queue?.retryNow()} />
@@ -350,7 +350,7 @@ export function SiftScreen() {
 
   if (isWide) {
     return (
-      <View style={[styles.root, styles.wideRoot, { backgroundColor: theme.surface }]}>
+      <View role="main" style={[styles.root, styles.wideRoot, { backgroundColor: theme.surface }]}>
         <View style={styles.wideLeft}>
           {header}
           {entryArea}
@@ -375,7 +375,7 @@ export function SiftScreen() {
   }
 
   return (
-    <View style={[styles.root, { backgroundColor: theme.surface }]}>
+    <View role="main" style={[styles.root, { backgroundColor: theme.surface }]}>
       <View style={styles.phoneTop}>
         {header}
         {entryArea}

@@ -97,7 +97,7 @@ export function SweepScreen() {
   return (
     <Screen
       title="Sweep"
-      subtitle="Every hit in a run of sequential new notes: a strap, a bundle, a brick or more."
+      subtitle="Every find in a run of sequential new notes: a strap, a bundle, a brick or more."
       actions={<Button kind="quiet" label="‹ Hunts" accessibilityLabel="Back to hunts" onPress={() => router.push('/hunts')} testID="sweep-to-hunts" />}
     >
       <Card>
@@ -114,7 +114,7 @@ export function SweepScreen() {
             <Button
               kind="secondary"
               label="Export CSV"
-              accessibilityLabel="Export the hits as a CSV file"
+              accessibilityLabel="Export the finds as a CSV file"
               onPress={() => void exportCsv()}
               disabled={swept.result.hits.length === 0}
               testID="sweep-export"
@@ -142,7 +142,7 @@ export function SweepScreen() {
                 {starting.message ? <Notice tone="error">{starting.message}</Notice> : null}
                 <View style={styles.huntFields}>
                   <View style={styles.grow}>
-                    <Field label="Where the notes came from" value={source} onChangeText={setSource} error={starting.fields.source} testID="sweep-hunt-source" />
+                    <Field label="Where the notes came from (optional)" value={source} onChangeText={setSource} error={starting.fields.source} testID="sweep-hunt-source" />
                   </View>
                   <ChoiceRow
                     label="Face value"

@@ -1,16 +1,17 @@
 import { router } from 'expo-router';
-import { useState, type ReactNode } from 'react';
+import { useState } from 'react';
 import { ActivityIndicator, StyleSheet, View } from 'react-native';
 import { Button } from '@/components/ui/button';
 import { ChoiceRow } from '@/components/ui/choice-row';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
+import { SectionCard } from '@/components/ui/section-card';
 import { Stat, StatRow } from '@/components/ui/stat';
 import { Text } from '@/components/ui/text';
 import { useTheme } from '@/theme/theme-provider';
 import { useLayout } from '@/theme/use-layout';
-import { radius, space } from '@/theme/tokens';
+import { space } from '@/theme/tokens';
 import { usePeriodTally, type PeriodQuery } from './api';
 import { ChanceSection } from './components/chance-section';
 import { RateSection, type RateRow } from './components/rate-section';
@@ -21,25 +22,6 @@ const BUCKETS = [
   { value: 'week', label: 'By week' },
   { value: 'month', label: 'By month' },
 ] as const;
-
-function Section({ title, subtitle, children, testID }: { title: string; subtitle?: string; children: ReactNode; testID?: string }) {
-  const theme = useTheme();
-  return (
-    <View style={[styles.section, { borderColor: theme.line, backgroundColor: theme.surfaceRaised }]} testID={testID}>
-      <View style={styles.sectionHead}>
-        <Text variant="heading" accessibilityRole="header" aria-level={2}>
-          {title}
-        </Text>
-        {subtitle ? (
-          <Text variant="caption" tone="muted">
-            {subtitle}
-          </Text>
-        ) : null}
-      </View>
-      {children}
-    </View>
-  );
-}
 
 export function TallyScreen() {
   const theme = useTheme();
@@ -93,7 +75,7 @@ export function TallyScreen() {
   return (
     <Screen
       title="Tally"
-      subtitle="Your hit rate against what chance predicts for the same number of notes."
+      subtitle="Your find rate against what chance predicts for the same number of notes."
       maxWidth={1320}
       actions={<Button kind="quiet" label="‹ Hunts" accessibilityLabel="Back to hunts" onPress={() => router.push('/hunts')} testID="tally-to-hunts" />}
     >
@@ -133,24 +115,24 @@ export function TallyScreen() {
         <>
           <StatRow>
             <Stat label="Notes searched" value={formatCount(data.notes)} testID="tally-notes" />
-            <Stat label="Hits" value={formatCount(data.hits)} tone={data.hits ? 'hit' : 'ink'} />
+            <Stat label="Finds" value={formatCount(data.hits)} tone={data.hits ? 'hit' : 'ink'} />
             <Stat label="Per 1,000 notes" value={formatRate(data.perThousand)} testID="tally-rate" />
             <Stat label="Pulled" value={formatCount(data.pulled)} hint={`${formatCount(data.keeps)} scored as keepers`} />
             <Stat label="Read by camera" value={formatCount(data.entered.camera)} hint={`${formatCount(data.entered.keypad)} typed on the keypad`} testID="tally-entry" />
           </StatRow>
-          <Section
+          <SectionCard
             title="Per pattern, against chance"
             subtitle={`Low serials counted up to ${formatCount(data.lowLimit)}, your low limit.`}
             testID="tally-patterns"
           >
             <ChanceSection figures={data} wide={isWide} testID="tally-chance" />
-          </Section>
-          <Section title="Per hunt" subtitle="Hits per 1,000 notes in each hunt of the period." testID="tally-hunts">
+          </SectionCard>
+          <SectionCard title="Per hunt" subtitle="Finds per 1,000 notes in each hunt of the period." testID="tally-hunts">
             <RateSection what="hunts" firstHeader="Hunt" rows={byHunt} average={data.perThousand} wide={isWide} testID="tally-by-hunt" />
-          </Section>
-          <Section
+          </SectionCard>
+          <SectionCard
             title="Over time"
-            subtitle={`Hits per 1,000 notes ${bucket === 'week' ? 'each week (from Monday)' : 'each month'}, by the day a note was logged.`}
+            subtitle={`Finds per 1,000 notes ${bucket === 'week' ? 'each week (from Monday)' : 'each month'}, by the day a note was logged.`}
             testID="tally-time"
           >
             <RateSection
@@ -162,7 +144,7 @@ export function TallyScreen() {
               wide={isWide}
               testID="tally-over-time"
             />
-          </Section>
+          </SectionCard>
         </>
       ) : null}
     </Screen>
@@ -170,8 +152,6 @@ export function TallyScreen() {
 }
 
 const styles = StyleSheet.create({
-  section: { borderWidth: 1, borderRadius: radius.lg, padding: space.lg, gap: space.md },
-  sectionHead: { gap: space.xxs },
   controls: { gap: space.md },
   controlsWide: { flexDirection: 'row', gap: space.xl, flexWrap: 'wrap' },
   dates: { flexDirection: 'row', gap: space.sm, flexWrap: 'wrap', alignItems: 'flex-start' },

@@ -14,13 +14,18 @@ import os from 'node:os';
 import { join, resolve } from 'node:path';
 import { DataSource } from 'typeorm';
 import { writeDocSection } from '../../support/doc-section';
+import { readFlags } from '../../../scripts/lib/cli-flags';
 
 // The logger reads these when it is first imported, so they are set before the app is loaded.
 process.env.LOG_LEVEL = 'silent';
 process.env.NODE_ENV ??= 'test';
 
 const root = resolve(__dirname, '../../..');
-const write = !process.argv.includes('--no-write');
+const USAGE = `usage: npm run bench -- [--no-write]
+
+  --no-write   print the API figures only; leave docs/PERFORMANCE.md alone
+  --help       this text`;
+const write = !readFlags(process.argv.slice(2), { 'no-write': { type: 'boolean' } }, USAGE)['no-write'];
 const port = Number(process.env.PGPORT ?? 54329);
 const DB = 'strapsift_bench';
 // The scripts pass the superuser's URL (the local cluster takes passwords only).

@@ -1,5 +1,5 @@
 import type { EntityManager } from 'typeorm';
-import { uuidV5 } from '../../../lib/uuid-v5';
+import { v5 as uuidV5 } from 'uuid';
 
 /** Namespace of ids a restore derives when an archive's id is taken on this server (a fixed random UUID). */
 const RESTORE_NAMESPACE = 'b6a0f3d1-52c4-4e8b-9d37-0f1e6a2c8b54';

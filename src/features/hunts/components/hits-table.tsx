@@ -6,14 +6,14 @@ import { PatternBadges } from '@/components/ui/pattern-badges';
 import { Text } from '@/components/ui/text';
 import { useTheme } from '@/theme/theme-provider';
 import { fonts, radius, space } from '@/theme/tokens';
+import { formatDate } from '@/lib/format';
 
 /** The serial as printed on the note: prefix, digits, then the suffix letter or the star. */
 export function serialText(scan: Pick<ScanView, 'prefix' | 'digits' | 'suffix' | 'star'>): string {
   return [scan.prefix, scan.digits, scan.star ? '★' : scan.suffix].filter(Boolean).join(' ');
 }
 
-const when = (iso: string) =>
-  new Date(iso).toLocaleString('en-US', { month: 'short', day: 'numeric', hour: 'numeric', minute: '2-digit' });
+const when = (iso: string) => formatDate(iso, 'moment');
 
 function Fate({ scan }: { scan: ScanView }) {
   if (scan.pulled) return <Badge label="pulled" tone="ok" accessibilityLabel="Pulled from the strap" />;
@@ -38,7 +38,7 @@ export function HitsTable({ hits, wide, showLoggedBy }: HitsTableProps) {
   const theme = useTheme();
   if (!wide) {
     return (
-      <View role="list" aria-label={`Hits, ${hits.length} notes`} style={styles.cards} testID="hits-table">
+      <View role="list" aria-label={`Finds, ${hits.length} notes`} style={styles.cards} testID="hits-table">
         {hits.map((scan) => (
           <View
             key={scan.id}
@@ -98,7 +98,7 @@ export function HitsTable({ hits, wide, showLoggedBy }: HitsTableProps) {
   ];
   return (
     <DataTable
-      label={`Hits, ${hits.length} notes`}
+      label={`Finds, ${hits.length} notes`}
       columns={columns}
       rows={hits}
       rowKey={(scan) => scan.id}

@@ -7,14 +7,14 @@ import { PatternBadges } from '@/components/ui/pattern-badges';
 import { Text } from '@/components/ui/text';
 import { useTheme } from '@/theme/theme-provider';
 import { fonts, radius, space } from '@/theme/tokens';
-import { formatCount, formatDate } from '../../tally/format';
+import { caption, formatCount, formatDate } from '@/lib/format';
 
 function BestFind({ hunt }: { hunt: HuntSummary }) {
   const theme = useTheme();
   if (!hunt.bestFind) {
     return (
       <Text variant="caption" tone="faint">
-        no hits yet
+        no finds yet
       </Text>
     );
   }
@@ -44,7 +44,7 @@ export function HuntCards({ hunts, onOpen }: { hunts: readonly HuntSummary[]; on
         <View key={hunt.id} role="listitem">
         <Pressable
           accessibilityRole="button"
-          accessibilityLabel={`Open hunt ${hunt.title}, ${formatCount(hunt.notesSearched)} notes, ${hunt.hits} hits`}
+          accessibilityHint="Opens the hunt"
           onPress={() => onOpen(hunt.id)}
           testID={`hunt-card-${hunt.id}`}
           style={({ pressed }) => [
@@ -58,7 +58,7 @@ export function HuntCards({ hunts, onOpen }: { hunts: readonly HuntSummary[]; on
                 {hunt.title}
               </Text>
               <Text variant="caption" tone="muted" numberOfLines={1}>
-                {formatDate(hunt.startedAt)} · {hunt.source} · ${hunt.denomination}
+                {caption(formatDate(hunt.startedAt), hunt.source, `$${hunt.denomination}`)}
               </Text>
             </View>
             <Status hunt={hunt} />
@@ -71,7 +71,7 @@ export function HuntCards({ hunts, onOpen }: { hunts: readonly HuntSummary[]; on
               <Text variant="mono" tone={hunt.hits ? 'hit' : 'ink'}>
                 {formatCount(hunt.hits)}
               </Text>{' '}
-              hits
+              {hunt.hits === 1 ? 'find' : 'finds'}
             </Text>
             <Text variant="caption" tone="muted">
               <Text variant="mono">{formatCount(hunt.pulled)}</Text> pulled
@@ -99,7 +99,7 @@ export function HuntTable({ hunts, onOpen }: { hunts: readonly HuntSummary[]; on
             {hunt.title}
           </Text>
           <Text variant="caption" tone="muted" numberOfLines={1}>
-            {hunt.source} · ${hunt.denomination}
+            {caption(hunt.source, `$${hunt.denomination}`)}
           </Text>
         </View>
       ),
@@ -107,7 +107,7 @@ export function HuntTable({ hunts, onOpen }: { hunts: readonly HuntSummary[]; on
     { key: 'notes', header: 'Notes searched', align: 'right', width: 130, cell: (hunt) => hunt.notesSearched },
     {
       key: 'hits',
-      header: 'Hits',
+      header: 'Finds',
       align: 'right',
       width: 70,
       cell: (hunt) => (

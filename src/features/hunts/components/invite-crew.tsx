@@ -9,8 +9,8 @@ import { useSubmit } from '@/lib/api/use-submit';
 import { useTheme } from '@/theme/theme-provider';
 import { space } from '@/theme/tokens';
 import { sendInvite, useInvites, withdrawInvite } from '../api';
+import { formatShortDate as formatDate } from '@/lib/format';
 
-const formatDate = (iso: string) => new Date(iso).toLocaleDateString('en-US', { month: 'short', day: 'numeric' });
 
 /** The owner invites crew by e-mail (no account needed yet) and sees who has not answered. */
 export function InviteCrew({ huntId }: { huntId: string }) {

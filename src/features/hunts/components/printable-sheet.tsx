@@ -1,8 +1,10 @@
 import { StyleSheet, Text, View } from 'react-native';
 import type { StrapRow, StrapSheet } from '@shared/contracts';
+import { balanceOf } from '@shared/straps';
 import { NOTES_PER_STRAP } from '@shared/trade';
 import { fonts } from '@/theme/tokens';
 import { printedStraps } from '../sheet-text';
+import { caption, formatCount, formatDate } from '@/lib/format';
 
 // Paper is white whatever the screen's theme, and ink is black: these colours are the printer's, not the theme's.
 const INK = '#000000';
@@ -38,7 +40,7 @@ function StrapTable({ rows }: { rows: StrapRow[] }) {
             {row.notesBack}
           </Text>
           <Text role="cell" style={[styles.cell, styles.mark]}>
-            {row.complete ? '✓' : row.notesBack < NOTES_PER_STRAP ? `${NOTES_PER_STRAP - row.notesBack} short` : `${row.notesBack - NOTES_PER_STRAP} over`}
+            {row.complete ? '✓' : balanceOf(row.notesBack).label}
           </Text>
         </View>
       ))}
@@ -57,13 +59,12 @@ export function PrintableSheet({ sheet, startedAt, hunter }: { sheet: StrapSheet
   const half = Math.ceil(straps.length / 2);
   const notesBack = straps.reduce((sum, row) => sum + row.notesBack, 0);
   const complete = straps.filter((row) => row.complete).length;
-  const date = new Date(startedAt).toLocaleDateString('en-US', { weekday: 'short', month: 'short', day: 'numeric', year: 'numeric' });
   return (
     <View style={styles.page} testID="printable-sheet">
       <Text style={styles.kicker}>STRAP SHEET</Text>
       <Text style={styles.title}>{sheet.title}</Text>
       <Text style={styles.meta}>
-        {sheet.source} · ${sheet.denomination} notes · {date} · {hunter}
+        {caption(sheet.source, `$${sheet.denomination} notes`, formatDate(startedAt), hunter)}
       </Text>
       <View style={split ? styles.columns : null}>
         <View style={split ? styles.column : null}>
@@ -76,7 +77,7 @@ export function PrintableSheet({ sheet, startedAt, hunter }: { sheet: StrapSheet
         ) : null}
       </View>
       <Text style={styles.totals} testID="printable-totals">
-        {straps.length} straps · {notesBack.toLocaleString('en-US')} notes going back · {complete} of {straps.length} complete
+        {straps.length} straps · {formatCount(notesBack)} notes going back · {complete} of {straps.length} complete
       </Text>
       <View style={styles.signatures}>
         <View style={styles.signature}>

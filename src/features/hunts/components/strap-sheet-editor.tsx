@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { StrapRow, StrapSheet, UpdateStrapRequest } from '@shared/contracts';
-import { NOTES_PER_STRAP } from '@shared/trade';
+import { balanceOf, strapStatus } from '@shared/straps';
 import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
 import { DataTable, type Column } from '@/components/ui/data-table';
@@ -11,15 +11,16 @@ import { Text } from '@/components/ui/text';
 import { ApiError } from '@/lib/api/api-error';
 import { useTheme } from '@/theme/theme-provider';
 import { radius, space } from '@/theme/tokens';
-import { formatCount } from '../../tally/format';
+import { formatCount } from '@/lib/format';
 import {
+  BALANCE_TONE,
   draftFrom,
   isTouched,
   parseStrapDraft,
   previewBack,
+  previewTone,
   readWhole,
   signed,
-  strapState,
   type StrapDraft,
   type StrapDraftField,
 } from '../strap-draft';
@@ -41,8 +42,8 @@ interface Editing {
 }
 
 function StateBadge({ row }: { row: StrapRow }) {
-  const state = strapState(row);
-  return <Badge label={state.label} tone={state.tone} accessibilityLabel={`Strap ${row.number}: ${state.label}`} />;
+  const status = strapStatus(row);
+  return <Badge label={status.label} tone={BALANCE_TONE[status.balance]} accessibilityLabel={`Strap ${row.number}: ${status.label}`} />;
 }
 
 function Searched({ row }: { row: StrapRow }) {
@@ -167,18 +168,12 @@ function StrapForm({
       />
       <Text
         testID={`strap-preview-${n}`}
-        tone={preview ? (preview.complete ? 'ok' : 'hit') : 'faint'}
+        tone={preview ? previewTone(preview.notesBack) : 'faint'}
         accessibilityLiveRegion="polite"
         aria-live="polite"
       >
         {preview
-          ? `Goes back with ${preview.notesBack} notes: ${
-              preview.complete
-                ? 'complete'
-                : preview.notesBack < NOTES_PER_STRAP
-                  ? `${NOTES_PER_STRAP - preview.notesBack} short`
-                  : `${preview.notesBack - NOTES_PER_STRAP} over`
-            }`
+          ? `Goes back with ${preview.notesBack} notes: ${balanceOf(preview.notesBack).label}`
           : 'Type whole numbers to see what the strap goes back with.'}
       </Text>
       <View style={styles.formActions}>

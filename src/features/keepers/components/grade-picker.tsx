@@ -19,8 +19,8 @@ export function GradePicker({ value, onChange, error }: { value: string; onChang
           return (
             <Pressable
               key={grade.grade}
-              accessibilityRole="radio"
-              accessibilityState={{ checked: selected }}
+              role="radio"
+              aria-checked={selected}
               accessibilityLabel={`Grade ${grade.label}`}
               onPress={() => onChange(String(grade.grade))}
               style={[styles.pill, { borderColor: selected ? theme.brand : theme.line, backgroundColor: selected ? theme.brand : theme.surfaceRaised }]}

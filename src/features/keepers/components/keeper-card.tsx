@@ -27,7 +27,6 @@ export function KeeperCard({ keeper, onOpen, asRow }: { keeper: KeeperSummary; o
   return (
     <Pressable
       accessibilityRole="link"
-      accessibilityLabel={`Keeper ${keeperTitle(keeper)}, ${keeper.patterns.map((id) => PATTERN_NAMES[id]).join(', ') || 'no pattern'}`}
       onPress={onOpen}
       testID={`keeper-${keeper.digits}`}
       style={({ hovered }: { hovered?: boolean }) => [

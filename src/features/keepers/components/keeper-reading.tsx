@@ -4,7 +4,8 @@ import { PATTERN_NAMES, type Reading } from '@shared/engine';
 import { Badge } from '@/components/ui/badge';
 import { Text } from '@/components/ui/text';
 import { space } from '@/theme/tokens';
-import { nearMissLines, oneInText } from '../../sift/reading-view';
+import { nearMissLines } from '../../sift/reading-view';
+import { formatCount, formatOneIn } from '@/lib/format';
 
 /** The server's reading of a keeper's serial: patterns, odds, near misses and the trade notes that apply. */
 export function KeeperReading({ reading }: { reading: ReadingView }) {
@@ -22,9 +23,9 @@ export function KeeperReading({ reading }: { reading: ReadingView }) {
       </Text>
       {reading.odds.combination ? (
         <Text tone="muted">
-          {oneInText(reading.odds.combination.oneIn ?? Infinity)} serials has{' '}
-          {reading.odds.combination.ids.length > 1 ? 'all of these patterns' : 'this pattern'} ({reading.odds.combination.count.toLocaleString('en-US')} of{' '}
-          {reading.odds.domainSize.toLocaleString('en-US')}).
+          {formatOneIn(reading.odds.combination.oneIn ?? Infinity)} serials has{' '}
+          {reading.odds.combination.ids.length > 1 ? 'all of these patterns' : 'this pattern'} ({formatCount(reading.odds.combination.count)} of{' '}
+          {formatCount(reading.odds.domainSize)}).
         </Text>
       ) : null}
       {reading.score.lines.map((line) => (

@@ -10,8 +10,9 @@ import { copyText } from '@/lib/copy-text';
 import { useTheme } from '@/theme/theme-provider';
 import { fonts, radius, space } from '@/theme/tokens';
 import { createShareLink, revokeShareLink, useShareStatus } from '../api';
+import { formatDate } from '@/lib/format';
 
-const formatDate = (iso: string) => new Date(iso).toLocaleDateString('en-US', { year: 'numeric', month: 'short', day: 'numeric' });
+const mediumDate = (iso: string) => formatDate(iso, 'medium');
 
 /**
  * A read-only link to this one note for another collector. Only a hash of the link is kept, so its
@@ -66,7 +67,7 @@ export function ShareCard({ keeperId }: { keeperId: string }) {
           </View>
         </View>
       ) : active ? (
-        <Text testID="share-active">A link is out since {formatDate(active.createdAt)}.</Text>
+        <Text testID="share-active">A link is out since {mediumDate(active.createdAt)}.</Text>
       ) : status.data ? (
         <Text tone="muted">Not shared.</Text>
       ) : null}

@@ -5,7 +5,7 @@ import { Text } from '@/components/ui/text';
 import { useTheme } from '@/theme/theme-provider';
 import { useLayout } from '@/theme/use-layout';
 import { fonts, space } from '@/theme/tokens';
-import { oneInText } from '../../sift/reading-view';
+import { formatCount, formatOneIn } from '@/lib/format';
 
 interface Row {
   key: string;
@@ -17,7 +17,6 @@ interface Row {
   weight: number | undefined;
 }
 
-const fmt = (n: number) => n.toLocaleString('en-US');
 
 /**
  * Every pattern with its exact count over 00000001–99999999, "1 in N", rarity points log10(1/p),
@@ -39,7 +38,7 @@ export function RarityTable({
     const patterns = oddsTable({ lowLimit, domainLast }).map((odds) => ({
       key: odds.id,
       name: PATTERN_NAMES[odds.id as PatternId],
-      definition: odds.id === 'low' ? `serial ≤ ${fmt(lowLimit)} (your low limit)` : PATTERN_DEFINITIONS[odds.id as PatternId],
+      definition: odds.id === 'low' ? `serial ≤ ${formatCount(lowLimit)} (your low limit)` : PATTERN_DEFINITIONS[odds.id as PatternId],
       count: odds.count,
       oneIn: odds.oneIn,
       points: odds.points,
@@ -58,45 +57,57 @@ export function RarityTable({
   const full = domainLast === 99_999_999;
 
   return (
-    <View role="table" accessibilityLabel="Rarity of every pattern" testID="rarity-table">
-      <View style={[styles.row, styles.head, { borderBottomColor: theme.line }]} role="row">
-        <Text variant="label" tone="muted" style={styles.name}>
-          Pattern
-        </Text>
-        <Text variant="label" tone="muted" style={styles.num}>
-          Serials
-        </Text>
-        {isWide ? (
-          <Text variant="label" tone="muted" style={styles.num}>
-            1 in
+    <View>
+      <View role="table" aria-label="Rarity of every pattern" testID="rarity-table">
+        <View style={[styles.row, styles.head, { borderBottomColor: theme.line }]} role="row">
+          <Text role="columnheader" variant="label" tone="muted" style={styles.name}>
+            Pattern
           </Text>
-        ) : null}
-        <Text variant="label" tone="muted" style={styles.small}>
-          Rarity
-        </Text>
-        <Text variant="label" tone="muted" style={styles.small}>
-          Weight
-        </Text>
-      </View>
-      {rows.map((row) => (
-        <View key={row.key} style={[styles.row, { borderBottomColor: theme.line }]} role="row">
-          <View style={styles.name}>
-            <Text bold>{row.name}</Text>
-            <Text variant="caption" tone="muted">
-              {row.definition}
-              {isWide ? '' : ` · ${oneInText(row.oneIn)}`}
+          <Text role="columnheader" variant="label" tone="muted" style={styles.num}>
+            Serials
+          </Text>
+          {isWide ? (
+            <Text role="columnheader" variant="label" tone="muted" style={styles.num}>
+              1 in
+            </Text>
+          ) : null}
+          <Text role="columnheader" variant="label" tone="muted" style={styles.small}>
+            Rarity
+          </Text>
+          <Text role="columnheader" variant="label" tone="muted" style={styles.small}>
+            Weight
+          </Text>
+        </View>
+        {rows.map((row) => (
+          <View key={row.key} style={[styles.row, { borderBottomColor: theme.line }]} role="row">
+            <View role="cell" style={styles.name}>
+              <Text bold>{row.name}</Text>
+              <Text variant="caption" tone="muted">
+                {row.definition}
+                {isWide ? '' : ` · ${formatOneIn(row.oneIn)}`}
+              </Text>
+            </View>
+            <Text role="cell" style={[styles.num, styles.mono]}>
+              {formatCount(row.count)}
+            </Text>
+            {isWide ? (
+              <Text role="cell" style={[styles.num, styles.mono]}>
+                {formatOneIn(row.oneIn).replace('1 in ', '')}
+              </Text>
+            ) : null}
+            <Text role="cell" style={[styles.small, styles.mono]}>
+              {Number.isFinite(row.points) ? row.points.toFixed(2) : '—'}
+            </Text>
+            <Text role="cell" style={[styles.small, styles.mono, { color: row.weight ? theme.hit : theme.inkFaint }]}>
+              {row.weight ?? '–'}
             </Text>
           </View>
-          <Text style={[styles.num, styles.mono]}>{fmt(row.count)}</Text>
-          {isWide ? <Text style={[styles.num, styles.mono]}>{oneInText(row.oneIn).replace('1 in ', '')}</Text> : null}
-          <Text style={[styles.small, styles.mono]}>{Number.isFinite(row.points) ? row.points.toFixed(2) : '—'}</Text>
-          <Text style={[styles.small, styles.mono, { color: row.weight ? theme.hit : theme.inkFaint }]}>{row.weight ?? '–'}</Text>
-        </View>
-      ))}
+        ))}
+      </View>
       <Text variant="caption" tone="faint" style={styles.foot}>
         {full
           ? 'Counts are exact over the 99,999,999 serials 00000001–99999999 (worked out by counting, not sampling).'
-          : `Pattern counts are exact over the ${fmt(domainLast)} serials 00000001–${String(domainLast).padStart(8, '0')}, where circulating notes stop in a block (run ends: common practice among hunters); run and count rows stay over 00000001–99999999.`}{' '}
+          : `Pattern counts are exact over the ${formatCount(domainLast)} serials 00000001–${String(domainLast).padStart(8, '0')}, where circulating notes stop in a block (run ends: common practice among hunters); run and count rows stay over 00000001–99999999.`}{' '}
         Rarity is log10 of 1 in N: each point is ten times rarer. Many sellers call only true binaries (0s and 1s) “binary”; here binary is any two digits, and true binary is shown on its own row.
       </Text>
     </View>

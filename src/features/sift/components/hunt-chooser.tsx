@@ -8,6 +8,7 @@ import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
 import { useSubmit } from '@/lib/api/use-submit';
+import { countOf, formatCount, formatDate } from '@/lib/format';
 import { kv } from '@/lib/storage/kv';
 import { useTheme } from '@/theme/theme-provider';
 import { radius, space } from '@/theme/tokens';
@@ -17,7 +18,7 @@ const LAST_SOURCE = 'strapsift.sift.lastSource';
 const LAST_DENOMINATION = 'strapsift.sift.lastDenomination';
 
 export function defaultHuntTitle(now = new Date()): string {
-  return now.toLocaleDateString('en-US', { weekday: 'short', day: 'numeric', month: 'short', year: 'numeric' });
+  return formatDate(now, 'long');
 }
 
 const STRAP_CHOICES = [
@@ -55,7 +56,8 @@ export function HuntChooser({ onChosen, onCancel }: { onChosen(hunt: HuntSummary
       plannedStraps,
       inSequence: inSequence === 'sequence',
     });
-    await kv.set(LAST_SOURCE, source.trim());
+    // Remembered once given; an empty source never wipes out the last one.
+    if (source.trim()) await kv.set(LAST_SOURCE, source.trim());
     await kv.set(LAST_DENOMINATION, denomination);
     onChosen(hunt);
   });
@@ -72,14 +74,13 @@ export function HuntChooser({ onChosen, onCancel }: { onChosen(hunt: HuntSummary
             <Pressable
               key={hunt.id}
               accessibilityRole="button"
-              accessibilityLabel={`Continue ${hunt.title}`}
               onPress={() => onChosen(hunt)}
               style={({ hovered }: { hovered?: boolean }) => [styles.huntRow, { borderColor: theme.line }, hovered && { backgroundColor: theme.surfaceSunken }]}
             >
               <View style={styles.huntText}>
                 <Text bold>{hunt.title}</Text>
                 <Text variant="caption" tone="muted">
-                  {hunt.source} · ${hunt.denomination} · {hunt.notesSearched.toLocaleString('en-US')} notes · {hunt.hits} hits
+                  {[hunt.source, `$${hunt.denomination}`, `${formatCount(hunt.notesSearched)} notes`, countOf(hunt.hits, 'find')].filter(Boolean).join(' · ')}
                   {hunt.role === 'crew' ? ` · crew of ${hunt.owner.displayName}` : ''}
                 </Text>
               </View>
@@ -97,7 +98,7 @@ export function HuntChooser({ onChosen, onCancel }: { onChosen(hunt: HuntSummary
         </Text>
         {message ? <Notice tone="error">{message}</Notice> : null}
         <Field label="Title" value={title} onChangeText={setTitle} error={fields.title} testID="hunt-title" />
-        <Field label="Where the notes came from" value={source} onChangeText={setSource} placeholder="e.g. the branch on Mill Street" error={fields.source} testID="hunt-source" />
+        <Field label="Where the notes came from (optional)" value={source} onChangeText={setSource} placeholder="e.g. the branch on Mill Street" error={fields.source} testID="hunt-source" />
         <ChoiceRow
           label="Face value"
           options={DENOMINATIONS.map((value) => ({ value, label: `$${value}` }))}

@@ -66,7 +66,7 @@ export function Keypad({ onDigit, onDelete, onLog, onToggleStar, onTogglePulled,
         <KeypadKey
           label="Log note"
           tone="primary"
-          accessibilityLabel="Log this note and start the next"
+          accessibilityLabel="Log note and start the next"
           onPress={onLog}
           disabled={!canLog}
           shortcut={showShortcuts ? '⏎' : undefined}

@@ -4,7 +4,8 @@ import { Badge } from '@/components/ui/badge';
 import { Text } from '@/components/ui/text';
 import { useTheme } from '@/theme/theme-provider';
 import { fonts, radius, space } from '@/theme/tokens';
-import { nearMissLines, neighbourLines, oneInText } from '../reading-view';
+import { nearMissLines, neighbourLines } from '../reading-view';
+import { formatOneIn } from '@/lib/format';
 import { stillPossible } from '../still-possible';
 
 interface ReadingPanelProps {
@@ -83,7 +84,7 @@ export function ReadingPanel({ digits, reading, weights, compact }: ReadingPanel
           </Text>
           <Text variant="caption" tone="muted">
             {reading.odds.combination
-              ? `${oneInText(reading.odds.combination.oneIn)} notes has ${reading.patterns.length > 1 ? 'all of these' : 'this'}`
+              ? `${formatOneIn(reading.odds.combination.oneIn)} notes has ${reading.patterns.length > 1 ? 'all of these' : 'this'}`
               : reading.score.suggestion}
           </Text>
         </View>

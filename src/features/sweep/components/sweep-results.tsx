@@ -9,18 +9,19 @@ import { Text } from '@/components/ui/text';
 import { useTheme } from '@/theme/theme-provider';
 import { fonts, space } from '@/theme/tokens';
 import { fullSerial, position } from '../sweep-input';
+import { formatCount } from '@/lib/format';
 
 /** Rows drawn at once: a brick of new notes rarely has more hits; a 10-million sweep pages. */
 export const SWEEP_PAGE = 100;
 
-const count = (value: number) => value.toLocaleString('en-US');
+const count = formatCount;
 
-/** "12 hits in 4,000 notes, 12345600 to 12349599". */
+/** "12 finds in 4,000 notes, 12345600 to 12349599". */
 export function sweepHeadline(result: SweepResult): string {
   const first = String(result.first).padStart(8, '0');
   const last = String(result.last).padStart(8, '0');
   const hits = result.hits.length;
-  return `${count(hits)} ${hits === 1 ? 'hit' : 'hits'} in ${count(result.count)} ${result.count === 1 ? 'note' : 'notes'}, ${first} to ${last}`;
+  return `${count(hits)} ${hits === 1 ? 'find' : 'finds'} in ${count(result.count)} ${result.count === 1 ? 'note' : 'notes'}, ${first} to ${last}`;
 }
 
 interface SweepResultsProps {
@@ -99,7 +100,7 @@ export function SweepResults({ result, serial, wide }: SweepResultsProps) {
       )}
       {result.hits.length ? (
         <DataTable
-          label={`Hits of the sweep, ${count(result.hits.length)} serials${pages > 1 ? `, page ${page + 1} of ${pages}` : ''}`}
+          label={`Finds of the sweep, ${count(result.hits.length)} serials${pages > 1 ? `, page ${page + 1} of ${pages}` : ''}`}
           columns={columns}
           rows={shown}
           rowKey={(hit) => hit.serial}
@@ -110,7 +111,7 @@ export function SweepResults({ result, serial, wide }: SweepResultsProps) {
         <View style={styles.pager}>
           <Button compact kind="secondary" label="‹ Previous" onPress={() => setPage(page - 1)} disabled={page === 0} testID="sweep-previous" />
           <Text tone="muted" testID="sweep-page">
-            Hits {count(page * SWEEP_PAGE + 1)}–{count(page * SWEEP_PAGE + shown.length)} of {count(result.hits.length)}
+            Finds {count(page * SWEEP_PAGE + 1)}–{count(page * SWEEP_PAGE + shown.length)} of {count(result.hits.length)}
           </Text>
           <Button compact kind="secondary" label="Next ›" onPress={() => setPage(page + 1)} disabled={page >= pages - 1} testID="sweep-next" />
         </View>

@@ -51,7 +51,7 @@ function LuckCell({ row }: { row: TallyPatternRow }) {
 export function chanceSummary(figures: ChanceFigures): string {
   const lucky = figures.patterns.filter((row) => verdict(row) === 'more').map((row) => row.name);
   const thin = figures.patterns.filter((row) => verdict(row) === 'fewer').map((row) => row.name);
-  const parts = [`Hits found against hits expected by chance in ${formatCount(figures.notes)} notes.`];
+  const parts = [`Finds against the finds expected by chance in ${formatCount(figures.notes)} notes.`];
   if (lucky.length) parts.push(`More than chance: ${lucky.join(', ')}.`);
   if (thin.length) parts.push(`Fewer than chance: ${thin.join(', ')}.`);
   if (!lucky.length && !thin.length) parts.push('Every pattern is about what chance predicts.');
@@ -120,7 +120,7 @@ export function ChanceSection({ figures, wide, testID }: { figures: ChanceFigure
         </View>
         <View style={wide ? styles.tableWide : null}>
           <DataTable
-            label={`Hits per pattern against chance, ${formatCount(figures.notes)} notes`}
+            label={`Finds per pattern against chance, ${formatCount(figures.notes)} notes`}
             columns={wide ? wideColumns : compactColumns}
             rows={figures.patterns}
             rowKey={(row) => row.id}

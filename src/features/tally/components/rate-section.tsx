@@ -25,7 +25,7 @@ export function rateSummary(what: string, rows: readonly RateRow[], average: num
   const high = sorted[0]!;
   const low = sorted[sorted.length - 1]!;
   return (
-    `Hits per 1,000 notes for ${rows.length} ${what}. Highest: ${high.name}, ${formatRate(high.perThousand)}. ` +
+    `Finds per 1,000 notes for ${rows.length} ${what}. Highest: ${high.name}, ${formatRate(high.perThousand)}. ` +
     `Lowest: ${low.name}, ${formatRate(low.perThousand)}. Average over the period: ${formatRate(average)}.`
   );
 }
@@ -41,7 +41,7 @@ interface RateSectionProps {
   testID?: string;
 }
 
-/** Hits per 1,000 notes as bars, with the average as a dashed line, and the same numbers in a table. */
+/** Finds per 1,000 notes as bars, with the average as a dashed line, and the same numbers in a table. */
 export function RateSection({ what, firstHeader, rows, average, wide, chartData, testID }: RateSectionProps) {
   if (rows.length === 0) return <Text tone="muted">No notes in this period.</Text>;
   const columns: Column<RateRow>[] = [
@@ -61,7 +61,7 @@ export function RateSection({ what, firstHeader, rows, average, wide, chartData,
       ),
     },
     { key: 'notes', header: 'Notes', align: 'right', cell: (row) => <Text variant="mono" style={wide ? null : styles.small}>{formatCount(row.notes)}</Text> },
-    { key: 'hits', header: 'Hits', align: 'right', flex: 0.7, cell: (row) => <Text variant="mono" style={wide ? null : styles.small}>{formatCount(row.hits)}</Text> },
+    { key: 'hits', header: 'Finds', align: 'right', flex: 0.7, cell: (row) => <Text variant="mono" style={wide ? null : styles.small}>{formatCount(row.hits)}</Text> },
     {
       key: 'rate',
       header: wide ? 'Per 1,000' : 'Per 1k',
@@ -83,7 +83,7 @@ export function RateSection({ what, firstHeader, rows, average, wide, chartData,
       </View>
       <View style={wide ? styles.table : null}>
         <DataTable
-          label={`Hits per 1,000 notes by ${firstHeader.toLowerCase()}, ${formatCount(rows.length)} rows`}
+          label={`Finds per 1,000 notes by ${firstHeader.toLowerCase()}, ${formatCount(rows.length)} rows`}
           columns={columns}
           rows={rows}
           rowKey={(row) => row.key}
