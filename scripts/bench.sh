@@ -9,6 +9,8 @@ ensure_node_modules
 command -v cc >/dev/null || apt_install gcc
 say "engine bench"
 node_modules/.bin/tsx test/bench/engine/engine-bench.ts "$@"
+say "sequential chance calibration"
+node_modules/.bin/tsx test/bench/engine/sequential-bench.ts "$@"
 ensure_postgres
 say "API bench"
 node_modules/.bin/tsx test/bench/api/api-bench.ts "$@"
