@@ -14,6 +14,8 @@ command -v cc >/dev/null || apt_install gcc
 ensure_card_fonts
 say "engine bench"
 node_modules/.bin/tsx test/bench/engine/engine-bench.ts "$@"
+say "sequential chance calibration"
+node_modules/.bin/tsx test/bench/engine/sequential-bench.ts "$@"
 ensure_postgres
 PG_ADMIN_URL="$(admin_database_url postgres)"
 export PG_ADMIN_URL

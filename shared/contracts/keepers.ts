@@ -91,7 +91,8 @@ export type KeeperSort = z.infer<typeof keeperSort>;
 
 export const keeperListQuery = cursorQuery.extend({
   /** Matches serial (digits or as typed), series, district and notes. */
-  query: z.string().trim().max(100, 'must be at most 100 characters').optional(),
+  // PostgreSQL refuses text holding NUL, so it is refused here with a 400 rather than failing there.
+  query: z.string().trim().max(100, 'must be at most 100 characters').refine((text) => !text.includes('\u0000'), 'must not contain a NUL character').optional(),
   sort: keeperSort.default('newest'),
   status: keeperStatus.optional(),
 });

@@ -1,8 +1,8 @@
-import { lowerBound, membersOf } from './_lib/members';
 import { isPatternId } from './_lib/pattern-bits';
 import { DOMAIN_LAST } from './_lib/serial-value';
 import { verdictOf } from './_lib/verdict';
-import { DEFAULT_LOW_LIMIT, HIGH_FROM, PATTERN_IDS, isLowLimit } from './patterns';
+import { DEFAULT_LOW_LIMIT, PATTERN_IDS, isLowLimit } from './patterns';
+import { membersIn } from './sweep';
 import type { ExpectedHits, ExpectedRow, LowLimit, PatternId, RunDistribution } from './types';
 
 /** Shown with sequential figures: what they compare against, and why not Poisson. */
@@ -13,18 +13,6 @@ export const SEQUENTIAL_CAVEAT =
 
 const MAX_RUN = 10_000_000;
 
-/** Members of a pattern up to `last`, ascending; the low and high bands built as intervals. */
-function members(id: PatternId, lowLimit: number, last: number): Uint32Array {
-  if (id === 'low' || id === 'high') {
-    const from = id === 'low' ? 1 : HIGH_FROM;
-    const to = id === 'low' ? Math.min(lowLimit, last) : last;
-    const out = new Uint32Array(Math.max(0, to - from + 1));
-    for (let i = 0; i < out.length; i++) out[i] = from + i;
-    return out;
-  }
-  const list = membersOf(id);
-  return list.subarray(0, lowerBound(list, last + 1));
-}
 
 /**
  * Over every start s = 1 … last − L + 1, the count of members in s … s + L − 1.
@@ -87,7 +75,7 @@ export function runDistribution(
   const key = `${id}:${runLength}:${lowLimit}:${last}`;
   const known = cache.get(key);
   if (known) return known;
-  const { counts, starts } = histogram(members(id, lowLimit, last), runLength, last);
+  const { counts, starts } = histogram(membersIn(id, 1, last, lowLimit), runLength, last);
   let top = counts.length - 1;
   while (top > 0 && counts[top] === 0) top--;
   const probabilities = new Array<number>(top + 1);

@@ -16,7 +16,7 @@ function idsFor(mask: number): readonly PatternId[] {
 }
 
 /** Members of `id` in [first, last], ascending (the low and high bands are plain intervals). */
-function membersIn(id: PatternId, first: number, last: number, lowLimit: number): Uint32Array {
+export function membersIn(id: PatternId, first: number, last: number, lowLimit: number): Uint32Array {
   if (id === 'low' || id === 'high') {
     const from = id === 'low' ? first : Math.max(first, HIGH_FROM);
     const to = id === 'low' ? Math.min(last, lowLimit) : last;
