@@ -231,6 +231,8 @@ describe('POST /api/import/archive with a bad or tampered archive', () => {
   it('when a record fails the contract, then 400 names it and nothing changes', async () => {
     const notes = archive.json.notes.map((note, i) => (i === 1 ? { ...note, strap: 0 } : note));
     await refused(rezip(archive, { json: { ...archive.json, notes } }), /notes\[1\]\.strap/);
+    // A member named like one of Object.prototype's is an unknown member, not a crash.
+    await refused(rezip(archive, { json: { ...archive.json, toString: [1] } }), /"toString", which is not part of a version 1 archive/);
     const keepers = archive.json.keepers.map((keeper) => ({ ...keeper, patterns: ['solid'] }));
     await refused(rezip(archive, { json: { ...archive.json, keepers } }), /is not a solid/);
   });

@@ -7,9 +7,10 @@ import { JsonSections, type JsonSectionEvent } from '../../server/features/trans
 function rebuild(events: JsonSectionEvent[]): Record<string, unknown> {
   const out: Record<string, unknown> = {};
   for (const event of events) {
+    const list = () => (Object.hasOwn(out, event.key) ? out[event.key] : (out[event.key] = [])) as unknown[];
     if (event.kind === 'value') out[event.key] = event.value;
-    else if (event.kind === 'item') ((out[event.key] ??= []) as unknown[]).push(event.value);
-    else out[event.key] ??= [];
+    else if (event.kind === 'item') list().push(event.value);
+    else list();
   }
   return out;
 }

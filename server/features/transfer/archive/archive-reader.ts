@@ -115,12 +115,13 @@ export async function readArchive(path: string, limits: ArchiveLimits, visitor: 
           const parsed = archiveAccount.safeParse(event.value);
           if (!parsed.success) for (const [field, message] of Object.entries(fieldsFromZod(parsed.error))) report(`account.${field}`, message);
           else account = parsed.data;
-        } else if (key in SECTIONS) throw new ArchiveProblem(`${ARCHIVE_JSON} ${key}`, 'must be a list');
+        } else if (Object.hasOwn(SECTIONS, key)) throw new ArchiveProblem(`${ARCHIVE_JSON} ${key}`, 'must be a list');
         else throw new ArchiveProblem(ARCHIVE_JSON, `has "${key}", which is not part of a version 1 archive`);
         if (account && exportedAt) await visitor.account?.(account, exportedAt);
         return;
       }
-      const section = SECTIONS[key];
+      // Own keys only: a member called "toString" must not find Object.prototype's.
+      const section = Object.hasOwn(SECTIONS, key) ? SECTIONS[key] : undefined;
       if (!section) throw new ArchiveProblem(ARCHIVE_JSON, `has "${key}", which is not part of a version 1 archive`);
       if (event.index === 0) {
         if (seenKeys.has(key)) throw new ArchiveProblem(ARCHIVE_JSON, `has "${key}" twice`);
@@ -156,7 +157,7 @@ export async function readArchive(path: string, limits: ArchiveLimits, visitor: 
         await run(sections.end());
         for (const key of REQUIRED) {
           // An empty array is still present: `end-array` events do not mark keys, so count them here.
-          if (!seenKeys.has(key) && !(key in SECTIONS)) throw new ArchiveProblem(ARCHIVE_JSON, `has no "${key}"`);
+          if (!seenKeys.has(key) && !Object.hasOwn(SECTIONS, key)) throw new ArchiveProblem(ARCHIVE_JSON, `has no "${key}"`);
         }
         sawJson = true;
       },
