@@ -37,7 +37,7 @@ async function judge(page: Page, path: string, shot: string, found: Found[]): Pr
     await page.screenshot({ path: `test-results/screenshots/a11y/${shot}-${theme}.png` });
   }
   const ring = await focusRing(page);
-  if (ring) found.push({ screen: path, theme: 'keyboard', findings: [{ rule: 'visible-focus', impact: 'serious', help: ring, targets: [] }] });
+  if (ring) found.push({ screen: path, theme: 'keyboard', findings: [{ rule: 'visible-focus', impact: 'serious', help: ring, targets: [ring] }] });
 }
 
 /** Tabs to the first control and reports when keyboard focus has no clear ring (null when it does). */
@@ -45,7 +45,9 @@ async function focusRing(page: Page): Promise<string | null> {
   await page.keyboard.press('Tab');
   return page.evaluate(() => {
     const element = document.activeElement as HTMLElement | null;
-    if (!element || element === document.body) return 'Tab reached no control';
+    const controls = document.querySelectorAll('a[href], button:not([disabled]), input, select, textarea, [tabindex]:not([tabindex="-1"])').length;
+    // A page with nothing to operate (an unknown share or invitation link) has no focus to show.
+    if (!element || element === document.body) return controls ? `Tab reached none of the ${controls} controls` : null;
     const style = getComputedStyle(element);
     const width = parseFloat(style.outlineWidth);
     return style.outlineStyle !== 'none' && width >= 2 ? null : `${element.tagName} "${element.getAttribute('aria-label') ?? element.textContent?.slice(0, 30)}" has outline ${style.outlineStyle} ${style.outlineWidth}`;

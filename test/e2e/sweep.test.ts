@@ -34,7 +34,7 @@ describe.each([
       const expected = sweep('58395120', 1000);
       await page.getByTestId('sweep-headline').waitFor();
       expect(expected.hits.map((hit) => hit.serial)).toEqual(['58395839']);
-      await expect(page.getByTestId('sweep-headline').textContent()).resolves.toBe('1 hit in 1,000 notes, 58395120 to 58396119');
+      await expect(page.getByTestId('sweep-headline').textContent()).resolves.toBe('1 find in 1,000 notes, 58395120 to 58396119');
       const row = page.getByTestId('sweep-table').getByRole('row').nth(1);
       await expect(row.getByRole('cell').allTextContents()).resolves.toEqual(
         name === 'wide' ? ['LG 58395839 A', '719', '8 · 20', 'repeater'] : ['LG 58395839 A', '719', 'repeater'],
