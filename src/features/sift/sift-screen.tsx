@@ -145,12 +145,20 @@ export function SiftScreen() {
 
   const logNote = useCallback(async () => {
     if (!reading || !reading.ok || (source.method === 'camera' && source.logged)) return;
-    const result = await logEntry(entry, source, starRunSize);
-    if (!result) return;
-    setStarRunText('');
-    if (source.method === 'camera' && result.patterns.length > 0) announceFind(camera.settings);
+    const note = entry;
+    const from = source;
+    // The cells clear before the note is stored: a fast typist's next digits land while the device
+    // queue is being written, and clearing afterwards would wipe them (a lost note at 13 notes a second).
     dispatch({ type: 'clear' });
     setSource(TYPED);
+    setStarRunText('');
+    const result = await logEntry(note, from, starRunSize);
+    if (!result) {
+      // Not stored (no hunt or queue yet): give the hunter their digits back rather than losing them.
+      dispatch({ type: 'restore', entry: note });
+      return;
+    }
+    if (from.method === 'camera' && result.patterns.length > 0) announceFind(camera.settings);
   }, [reading, entry, source, logEntry, camera.settings, starRunSize]);
 
   // Verdicts arrive one per frame; a ref keeps the handler current without restarting the camera.
