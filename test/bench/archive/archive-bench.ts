@@ -232,6 +232,7 @@ async function main(): Promise<void> {
       `Each account has ${KEEPERS} keepers with ${2 * KEEPERS} photos (invented 1,200 × 600 JPEGs) and its notes in hunts of 10,000. The export`,
       'is read over HTTP and written to disk as it arrives; the restore uploads that file, streamed from disk, into the same account',
       'created again after deletion. App, client and sampler share one process, so the memory figures include the client side too.',
+      'RSS above start is 0 MB where the process already held that much from setting up the accounts (drawing and uploading photos); the live heap after a forced collection is the figure for what a step keeps.',
       '',
       table,
       '',
