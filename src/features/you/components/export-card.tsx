@@ -30,7 +30,7 @@ export function ExportCard() {
       <Text variant="label" tone="muted">
         EXPORT
       </Text>
-      <Text tone="muted">Your hunts, every note you logged and your keepers, to keep or to take elsewhere. Photos stay in Strapsift.</Text>
+      <Text tone="muted">Your hunts, every note you logged and your keepers as spreadsheet files, to read elsewhere. These files leave photos out; the full archive above carries everything, photos included.</Text>
       {exporting.message ? <Notice tone="error">{exporting.message}</Notice> : null}
       {saved ? <Notice tone="ok">{`Saved ${saved}.`}</Notice> : null}
       <View style={styles.buttons}>
