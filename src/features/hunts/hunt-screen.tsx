@@ -47,7 +47,7 @@ export function HuntScreen() {
   const data = hunt.data;
   const crew = data.memberCount > 1;
   const siftThis = async () => {
-    await sift.selectHunt({ id: data.id, title: data.title, denomination: data.denomination });
+    await sift.selectHunt({ id: data.id, title: data.title, denomination: data.denomination, series: data.series });
     router.push('/sift');
   };
 

@@ -76,9 +76,16 @@ export function SiftScreen() {
   const reading = useMemo(
     () =>
       isComplete(entry)
-        ? read(`${entry.prefix}${entry.digits}`, { weights, watch, star: entry.star, denomination: session.hunt?.denomination, starRunSize })
+        ? read(`${entry.prefix}${entry.digits}`, {
+            weights,
+            watch,
+            star: entry.star,
+            denomination: session.hunt?.denomination,
+            series: session.hunt?.series ?? undefined,
+            starRunSize,
+          })
         : null,
-    [entry, weights, watch, session.hunt?.denomination, starRunSize],
+    [entry, weights, watch, session.hunt?.denomination, session.hunt?.series, starRunSize],
   );
   useEffect(() => {
     if (reading) measureReadingPainted();
@@ -105,6 +112,7 @@ export function SiftScreen() {
         watch,
         star: note.star,
         denomination: session.hunt?.denomination,
+        series: session.hunt?.series ?? undefined,
         starRunSize: runSize,
       });
       if (!result.ok || !queue || !session.count || !session.hunt) return null;
@@ -233,7 +241,7 @@ export function SiftScreen() {
           <HuntChooser
             onChosen={(hunt) => {
               setChoosing(false);
-              void session.selectHunt({ id: hunt.id, title: hunt.title, denomination: hunt.denomination });
+              void session.selectHunt({ id: hunt.id, title: hunt.title, denomination: hunt.denomination, series: hunt.series });
             }}
             onCancel={session.hunt ? () => setChoosing(false) : undefined}
           />

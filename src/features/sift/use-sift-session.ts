@@ -26,6 +26,8 @@ export interface CurrentHunt {
   id: string;
   title: string;
   denomination: number;
+  /** The series printed on the notes, when the hunt names one: readings check serial formats against it. */
+  series?: string | null;
 }
 
 export function useSiftSession(sheet: SheetStart | undefined) {
@@ -81,7 +83,7 @@ export function useSiftSession(sheet: SheetStart | undefined) {
 
   const selectHunt = useCallback(async (next: CurrentHunt | null) => {
     setHunt(next);
-    if (next) await kv.set(CURRENT_KEY, { id: next.id, title: next.title, denomination: next.denomination });
+    if (next) await kv.set(CURRENT_KEY, { id: next.id, title: next.title, denomination: next.denomination, series: next.series ?? null });
     else await kv.remove(CURRENT_KEY);
   }, []);
 

@@ -90,7 +90,7 @@ export function SweepScreen() {
       // A swept run is new notes in sequence: Tally compares it run for run, not as independent draws.
       inSequence: true,
     });
-    await sift.selectHunt({ id: hunt.id, title: hunt.title, denomination: hunt.denomination });
+    await sift.selectHunt({ id: hunt.id, title: hunt.title, denomination: hunt.denomination, series: hunt.series });
     router.push('/sift');
   });
 

@@ -42,6 +42,7 @@ export function HuntChooser({ onChosen, onCancel }: { onChosen(hunt: HuntSummary
   const [denomination, setDenomination] = useState<number>(1);
   const [plannedStraps, setPlannedStraps] = useState<number>(10);
   const [inSequence, setInSequence] = useState<'circulated' | 'sequence'>('circulated');
+  const [series, setSeries] = useState('');
 
   useEffect(() => {
     void kv.get<string>(LAST_SOURCE).then((saved) => saved && setSource(saved));
@@ -55,6 +56,8 @@ export function HuntChooser({ onChosen, onCancel }: { onChosen(hunt: HuntSummary
       denomination,
       plannedStraps,
       inSequence: inSequence === 'sequence',
+      // Readings then check each serial's prefix against the series (e.g. its series letter).
+      ...(series.trim() ? { series: series.trim().toUpperCase() } : {}),
     });
     // Remembered once given; an empty source never wipes out the last one.
     if (source.trim()) await kv.set(LAST_SOURCE, source.trim());
@@ -116,6 +119,15 @@ export function HuntChooser({ onChosen, onCancel }: { onChosen(hunt: HuntSummary
         <Text variant="caption" tone="faint">
           New notes in sequence are compared with every run of the same length; circulated notes as independent draws.
         </Text>
+        <Field
+          label="Series on the notes (optional)"
+          value={series}
+          onChangeText={setSeries}
+          placeholder="e.g. 2017A"
+          autoCapitalize="characters"
+          error={fields.series}
+          testID="hunt-series"
+        />
         {fields.plannedStraps ? <Text tone="danger">Planned straps {fields.plannedStraps}</Text> : null}
         <View style={styles.actions}>
           <Button label="Start hunt" busy={busy} onPress={() => void submit()} testID="start-hunt" style={styles.grow} />
