@@ -26,7 +26,7 @@ import { SyncBadge } from './components/sync-badge';
 import { Trail } from './components/trail';
 import { markEighthKey, measureReadingPainted } from './paint-timing';
 import { nearMissLines } from './reading-view';
-import { emptyEntry, entryReducer, isComplete, SERIAL_LENGTH, type EntryAction, type SerialEntry } from './serial-entry';
+import { emptyEntry, entryReducer, isComplete, SERIAL_LENGTH } from './serial-entry';
 import type { TrailNote } from './strap-count';
 import { KEY_HINTS, useHardwareKeys } from './use-hardware-keys';
 import { useSiftSession } from './use-sift-session';
@@ -49,14 +49,7 @@ export function SiftScreen() {
   const watch = useWatchForReading();
   const { queue, snapshot } = useScanQueue();
   const [choosing, setChoosing] = useState(false);
-  const [entry, dispatchEntry] = useReducer(entryReducer, emptyEntry);
-  // A desk keyboard can send keys faster than React paints (13 notes a second): the ref follows every
-  // key at once through the same pure reducer, so Enter logs what was typed, not what was last painted.
-  const entryRef = useRef<SerialEntry>(emptyEntry);
-  const dispatch = useCallback((action: EntryAction) => {
-    entryRef.current = entryReducer(entryRef.current, action);
-    dispatchEntry(action);
-  }, []);
+  const [entry, dispatch] = useReducer(entryReducer, emptyEntry);
   const [flash, setFlash] = useState<{ tone: 'ok' | 'error' | 'info'; text: string } | null>(null);
   const [starRunText, setStarRunText] = useState('');
   const starRunSize = entry.star ? parseStarRun(starRunText) : null;
@@ -100,7 +93,7 @@ export function SiftScreen() {
 
   const typeDigit = useCallback(
     (digit: string) => {
-      if (entryRef.current.digits.length === SERIAL_LENGTH - 1) markEighthKey();
+      if (entry.digits.length === SERIAL_LENGTH - 1) markEighthKey();
       if (source.method === 'camera' && source.logged) {
         // The camera already logged what the cells show: a typed digit starts the next note.
         dispatch({ type: 'clear' });
@@ -108,7 +101,7 @@ export function SiftScreen() {
       }
       dispatch({ type: 'digit', digit });
     },
-    [source, dispatch],
+    [entry.digits.length, source],
   );
 
   /** The one path for every note, typed or read: the device queue first, then the strap count. */
@@ -159,24 +152,14 @@ export function SiftScreen() {
   );
 
   const logNote = useCallback(async () => {
-    const note = entryRef.current;
-    if (!isComplete(note) || (source.method === 'camera' && source.logged)) return;
-    if (!read(`${note.prefix}${note.digits}`).ok) return;
-    const from = source;
-    const runSize = note.star ? starRunSize : null;
-    // The cells clear before the note is stored: a fast typist's next digits land while the device
-    // queue is being written, and clearing afterwards would wipe them.
+    if (!reading || !reading.ok || (source.method === 'camera' && source.logged)) return;
+    const result = await logEntry(entry, source, starRunSize);
+    if (!result) return;
+    setStarRunText('');
+    if (source.method === 'camera' && result.patterns.length > 0) announceFind(camera.settings);
     dispatch({ type: 'clear' });
     setSource(TYPED);
-    setStarRunText('');
-    const result = await logEntry(note, from, runSize);
-    if (!result) {
-      // Not stored (no hunt or queue yet): give the hunter their digits back rather than losing them.
-      if (entryRef.current.digits === '') dispatch({ type: 'restore', entry: note });
-      return;
-    }
-    if (from.method === 'camera' && result.patterns.length > 0) announceFind(camera.settings);
-  }, [source, logEntry, camera.settings, starRunSize, dispatch]);
+  }, [reading, entry, source, logEntry, camera.settings, starRunSize]);
 
   // Verdicts arrive one per frame; a ref keeps the handler current without restarting the camera.
   const onVerdict = useRef<(verdict: FrameVerdict) => void>(() => undefined);
