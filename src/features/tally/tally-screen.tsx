@@ -1,22 +1,16 @@
 import { router } from 'expo-router';
 import { useState } from 'react';
-import { ActivityIndicator, StyleSheet, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
+import { AsyncBlock } from '@/components/ui/async-block';
 import { Button } from '@/components/ui/button';
 import { ChoiceRow } from '@/components/ui/choice-row';
 import { Field } from '@/components/ui/field';
-import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
-import { SectionCard } from '@/components/ui/section-card';
-import { Stat, StatRow } from '@/components/ui/stat';
-import { Text } from '@/components/ui/text';
-import { useTheme } from '@/theme/theme-provider';
 import { useLayout } from '@/theme/use-layout';
 import { space } from '@/theme/tokens';
 import { usePeriodTally, type PeriodQuery } from './api';
-import { ChanceSection } from './components/chance-section';
-import { RateSection, type RateRow } from './components/rate-section';
-import { formatCount, formatDate, formatRate, formatShortDate } from './format';
-import { PERIOD_CHOICES, bucketLabel, fillBuckets, parseCustomPeriod, presetFrom, type PeriodChoice } from './period';
+import { TallyFigures } from './components/tally-figures';
+import { PERIOD_CHOICES, parseCustomPeriod, presetFrom, type PeriodChoice } from './period';
 
 const BUCKETS = [
   { value: 'week', label: 'By week' },
@@ -24,7 +18,6 @@ const BUCKETS = [
 ] as const;
 
 export function TallyScreen() {
-  const theme = useTheme();
   const { isWide } = useLayout();
   const [choice, setChoice] = useState<PeriodChoice>('12m');
   const [bucket, setBucket] = useState<'week' | 'month'>('month');
@@ -35,7 +28,7 @@ export function TallyScreen() {
   const [dateErrors, setDateErrors] = useState<{ from?: string; to?: string }>({});
 
   const query: PeriodQuery = choice === 'custom' ? { ...custom, bucket } : { from: presetFrom(choice), bucket };
-  const { data, error, isLoading, mutate } = usePeriodTally(query);
+  const { data, error, mutate } = usePeriodTally(query);
 
   const applyDates = () => {
     const parsed = parseCustomPeriod(fromText, toText);
@@ -46,31 +39,6 @@ export function TallyScreen() {
     setDateErrors({});
     setCustom({ from: parsed.from, to: parsed.to });
   };
-
-  const byHunt: RateRow[] = (data?.byHunt ?? []).map((row) => ({
-    key: row.huntId,
-    label: formatShortDate(row.startedAt),
-    name: row.title,
-    detail: formatDate(row.startedAt),
-    notes: row.notes,
-    hits: row.hits,
-    perThousand: row.perThousand,
-  }));
-  const overTime: RateRow[] = (data?.overTime ?? []).map((row) => ({
-    key: row.start,
-    label: bucketLabel(row.start, bucket, true),
-    name: bucket === 'week' ? `Week of ${bucketLabel(row.start, 'week')}` : bucketLabel(row.start, 'month'),
-    notes: row.notes,
-    hits: row.hits,
-    perThousand: row.perThousand,
-  }));
-
-  // The chart keeps weeks or months without notes as gaps; the table lists only those with notes.
-  const overTimeBars = fillBuckets(data?.overTime ?? [], bucket).map((row) => ({
-    key: row.start,
-    label: bucketLabel(row.start, bucket, true),
-    value: 'empty' in row ? 0 : row.perThousand,
-  }));
 
   return (
     <Screen
@@ -95,58 +63,9 @@ export function TallyScreen() {
         </View>
       ) : null}
 
-      {isLoading ? (
-        <View style={styles.loading} accessibilityLabel="Loading the tally">
-          <ActivityIndicator color={theme.brand} />
-          <Text tone="muted">Counting…</Text>
-        </View>
-      ) : error && !data ? (
-        <View style={styles.gap}>
-          <Notice tone="error" title="The tally could not be loaded">
-            {error instanceof Error ? error.message : 'Something went wrong.'}
-          </Notice>
-          <Button kind="secondary" label="Try again" onPress={() => void mutate()} style={styles.alignStart} />
-        </View>
-      ) : data && data.notes === 0 ? (
-        <Notice tone="info" title="No notes in this period" >
-          Notes you log on the Sift tab are counted here. Choose a longer period, or All time.
-        </Notice>
-      ) : data ? (
-        <>
-          <StatRow>
-            <Stat label="Notes searched" value={formatCount(data.notes)} testID="tally-notes" />
-            <Stat label="Finds" value={formatCount(data.hits)} tone={data.hits ? 'hit' : 'ink'} />
-            <Stat label="Per 1,000 notes" value={formatRate(data.perThousand)} testID="tally-rate" />
-            <Stat label="Pulled" value={formatCount(data.pulled)} hint={`${formatCount(data.keeps)} scored as keepers`} />
-            <Stat label="Read by camera" value={formatCount(data.entered.camera)} hint={`${formatCount(data.entered.keypad)} typed on the keypad`} testID="tally-entry" />
-          </StatRow>
-          <SectionCard
-            title="Per pattern, against chance"
-            subtitle={`Low serials counted up to ${formatCount(data.lowLimit)}, your low limit.`}
-            testID="tally-patterns"
-          >
-            <ChanceSection figures={data} wide={isWide} testID="tally-chance" />
-          </SectionCard>
-          <SectionCard title="Per hunt" subtitle="Finds per 1,000 notes in each hunt of the period." testID="tally-hunts">
-            <RateSection what="hunts" firstHeader="Hunt" rows={byHunt} average={data.perThousand} wide={isWide} testID="tally-by-hunt" />
-          </SectionCard>
-          <SectionCard
-            title="Over time"
-            subtitle={`Finds per 1,000 notes ${bucket === 'week' ? 'each week (from Monday)' : 'each month'}, by the day a note was logged.`}
-            testID="tally-time"
-          >
-            <RateSection
-              what={bucket === 'week' ? 'weeks' : 'months'}
-              firstHeader={bucket === 'week' ? 'Week' : 'Month'}
-              rows={overTime}
-              chartData={overTimeBars}
-              average={data.perThousand}
-              wide={isWide}
-              testID="tally-over-time"
-            />
-          </SectionCard>
-        </>
-      ) : null}
+      <AsyncBlock what="tally" data={data} error={error} retry={() => void mutate()}>
+        {(tally) => <TallyFigures data={tally} bucket={bucket} wide={isWide} />}
+      </AsyncBlock>
     </Screen>
   );
 }
@@ -157,7 +76,4 @@ const styles = StyleSheet.create({
   dates: { flexDirection: 'row', gap: space.sm, flexWrap: 'wrap', alignItems: 'flex-start' },
   dateField: { flexGrow: 1, flexBasis: 150 },
   dateButton: { marginTop: 22 },
-  loading: { alignItems: 'center', gap: space.sm, paddingVertical: space.xxl },
-  gap: { gap: space.md },
-  alignStart: { alignSelf: 'flex-start' },
 });
