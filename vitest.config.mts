@@ -6,9 +6,10 @@ const alias = {
   '@': fileURLToPath(new URL('./src', import.meta.url)),
 };
 
-// Three kinds of test with different needs: the engine is pure and parallel,
-// the server shares one real PostgreSQL database (so its files run one at a time),
-// components need a DOM, and the browser tests drive Chromium against the served app.
+// Kinds of test with different needs: the engine is pure and parallel; the server's files share one real
+// PostgreSQL database and run side by side, each with accounts of its own (a file whose checks cover whole
+// tables makes a database of its own: openScratchApi); components need a DOM; the browser tests drive
+// Chromium against the served app.
 export default defineConfig({
   resolve: { alias },
   test: {
@@ -28,7 +29,10 @@ export default defineConfig({
           name: 'server',
           include: ['test/server/**/*.test.ts'],
           environment: 'node',
-          fileParallelism: false,
+          // Two files at a time: the machine has two cores, and more would only queue on PostgreSQL.
+          maxWorkers: 2,
+          // A group of its own, so a machine with more cores (a different default for the others) still starts.
+          sequence: { groupOrder: 1 },
           testTimeout: 30_000,
           hookTimeout: 60_000,
         },

@@ -101,9 +101,15 @@ describe('DELETE /api/me', () => {
   });
 
   it('when no token is sent, then it answers 401 and deletes nothing', async () => {
-    const [before] = await api.dataSource.query('SELECT count(*)::int AS n FROM users');
+    // Judged on accounts of this test: other test files make and delete accounts at the same time.
+    const bystander = await registerUser(api.app, 'bystander');
+    const partner = await registerUser(api.app, 'bystander-partner');
+    await fillAccount(bystander, partner);
+    const before = await rowsOf(bystander.id);
+
     expect((await request(api.app).delete('/api/me')).status).toBe(401);
-    const [after] = await api.dataSource.query('SELECT count(*)::int AS n FROM users');
-    expect(after.n).toBe(before.n);
+
+    expect(await rowsOf(bystander.id)).toEqual(before);
+    expect(before.users).toBe(1);
   });
 });

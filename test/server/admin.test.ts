@@ -1,14 +1,16 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { adminStats, adminUser, adminUserPage } from '../../shared/contracts/admin';
-import { createHunt, missingId, openTestApi, postBatch, registerAdmin, registerUser, scanOf, type TestApi, type TestUser } from '../support/api';
+import { createHunt, missingId, openScratchApi, postBatch, registerAdmin, registerUser, scanOf, type TestApi, type TestUser } from '../support/api';
 
 let api: TestApi;
 let admin: TestUser;
 let collector: TestUser;
 
+// A database of its own: the console lists every account and counts every row, so other test files'
+// accounts (made and deleted while this file runs) would move the pages and the totals under it.
 beforeAll(async () => {
-  api = await openTestApi();
+  api = await openScratchApi('admin_console');
   admin = await registerAdmin(api);
   collector = await registerUser(api.app, 'console-collector');
 });

@@ -9,6 +9,7 @@ import { authResponse, type AuthResponse } from '../../shared/contracts/auth';
 import { huntDetail, type CreateHuntRequest, type HuntDetail } from '../../shared/contracts/hunts';
 import type { ScanInput } from '../../shared/contracts/scans';
 import { openTestDataSource } from './database';
+import { dropDatabase, freshDatabase } from './scratch-database';
 
 export interface TestApi {
   dataSource: DataSource;
@@ -25,7 +26,29 @@ export interface TestApi {
  * X-Forwarded-For from loopback so helpers can give each registered test user an address of its own.
  */
 export async function openTestApi(options: Partial<AppOptions> = {}): Promise<TestApi> {
-  const dataSource = await openTestDataSource();
+  return appOn(await openTestDataSource(), options);
+}
+
+/**
+ * The same app on a database of its own, migrated from empty and dropped on close, for a file whose
+ * checks cover whole tables (every account, every row): the shared database holds other files' rows,
+ * which change while server test files run side by side. `name` must be unique among the test files.
+ */
+export async function openScratchApi(name: string, options: Partial<AppOptions> = {}): Promise<TestApi> {
+  const url = await freshDatabase(name);
+  const dataSource = await openTestDataSource(url);
+  await dataSource.runMigrations();
+  const api = appOn(dataSource, options);
+  return {
+    ...api,
+    close: async () => {
+      await dataSource.destroy();
+      await dropDatabase(url);
+    },
+  };
+}
+
+function appOn(dataSource: DataSource, options: Partial<AppOptions>): TestApi {
   const outbox = new InMemoryResetOutbox();
   const app = createApp({ dataSource, resetMailer: outbox, trustedProxies: ['loopback'], limitNamespace: `test-${randomUUID()}`, ...options });
   const services = app.locals.services as Services;

@@ -124,6 +124,8 @@ export class ApiProcess {
       }
       await sleep(100);
     }
+    // Never leave it behind: a cluster's primary would go on starting workers after the test run ends.
+    await this.stop();
     throw new Error(`the API on port ${this.port} did not start`);
   }
 
