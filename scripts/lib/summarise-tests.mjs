@@ -11,13 +11,15 @@ let passed = 0;
 let failed = 0;
 let skipped = 0;
 for (const suite of report.testResults ?? []) {
+  let failedHere = 0;
   for (const test of suite.assertionResults ?? []) {
     if (test.status === 'passed') passed += 1;
-    else if (test.status === 'failed') failed += 1;
+    else if (test.status === 'failed') failedHere += 1;
     else skipped += 1;
   }
-  // A file that fails to load has no assertions but must still count as a failure.
-  if ((suite.assertionResults ?? []).length === 0 && suite.status === 'failed') failed += 1;
+  // A file that fails to load, or whose beforeAll fails (its tests then count as skipped), has no failed
+  // test but must still count as a failure.
+  failed += failedHere || (suite.status === 'failed' ? 1 : 0);
 }
 const tail = skipped ? `, ${skipped} skipped` : '';
 console.log(`${passed} passed, ${failed} failed${tail}`);
