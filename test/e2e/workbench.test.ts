@@ -79,13 +79,26 @@ describe.each([
     const { page } = browser;
     try {
       await signInAsDemo(page, { email: 'admin@strapsift.test', password: 'console-demo-2026' });
-      await page.goto(`${baseUrl()}/console`);
-      // The totals on screen are the server's own figures.
+      // The totals on screen are the server's own figures. Browser files in the other lane (e2e-lanes.ts) may
+      // register or log notes meanwhile, so the page and the API are read again until one reading of each agrees.
       const admin = await apiAs('admin@strapsift.test', 'console-demo-2026');
-      const { body: stats } = await admin<{ users: number; scans: number; keepers: number }>('/admin/stats');
-      await page.getByTestId('console-total-users').getByText(stats.users.toLocaleString('en-US'), { exact: true }).waitFor();
-      await expect(page.getByTestId('console-total-scans').textContent()).resolves.toBe(`Notes logged${stats.scans.toLocaleString('en-US')}`);
-      await expect(page.getByTestId('console-total-keepers').textContent()).resolves.toBe(`Keepers${stats.keepers.toLocaleString('en-US')}`);
+      const totalsOnScreen = async () => {
+        await page.goto(`${baseUrl()}/console`);
+        await page.getByTestId('console-total-keepers').waitFor();
+        await page.waitForFunction(() => !document.querySelector('[data-testid="console-total-keepers"]')?.textContent?.includes('…'));
+        return Promise.all(['users', 'scans', 'keepers'].map((key) => page.getByTestId(`console-total-${key}`).textContent()));
+      };
+      const totalsOfApi = async () => {
+        const { body: stats } = await admin<{ users: number; scans: number; keepers: number }>('/admin/stats');
+        return [`Accounts${stats.users.toLocaleString('en-US')}`, `Notes logged${stats.scans.toLocaleString('en-US')}`, `Keepers${stats.keepers.toLocaleString('en-US')}`];
+      };
+      let shown: Array<string | null> = [];
+      let served: string[] = [];
+      for (let attempt = 0; attempt < 5 && (attempt === 0 || shown.some((text, i) => text !== served[i])); attempt++) {
+        served = await totalsOfApi();
+        shown = await totalsOnScreen();
+      }
+      expect(shown).toEqual(served);
 
       // The search narrows the list to the one account, shown with its counts.
       await page.getByTestId('console-search').fill('crew@strapsift');
