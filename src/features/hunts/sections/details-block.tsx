@@ -2,7 +2,6 @@ import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { HuntDetail } from '@shared/contracts';
 import { Button } from '@/components/ui/button';
-import { ChoiceRow } from '@/components/ui/choice-row';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { SectionCard } from '@/components/ui/section-card';
@@ -10,11 +9,7 @@ import { Text } from '@/components/ui/text';
 import { useSubmit } from '@/lib/api/use-submit';
 import { space } from '@/theme/tokens';
 import { updateHunt } from '../api';
-
-const NOTE_ORDER_CHOICES = [
-  { value: 'circulated', label: 'Circulated, in no order' },
-  { value: 'sequence', label: 'New, in sequence' },
-] as const;
+import { HuntNotesFields, noteOrderOf, seriesOrNull, type NoteOrder } from '../components/hunt-notes-fields';
 
 const orderLabel = (inSequence: boolean) => (inSequence ? 'new, in sequence' : 'circulated, in no order');
 
@@ -27,14 +22,14 @@ export function DetailsBlock({ hunt, onSaved }: { hunt: HuntDetail; onSaved?: (h
   const [title, setTitle] = useState(hunt.title);
   const [source, setSource] = useState(hunt.source);
   const [series, setSeries] = useState(hunt.series ?? '');
-  const [order, setOrder] = useState<'circulated' | 'sequence'>(hunt.inSequence ? 'sequence' : 'circulated');
+  const [order, setOrder] = useState<NoteOrder>(noteOrderOf(hunt.inSequence));
   const [saved, setSaved] = useState(false);
   const saving = useSubmit(async () => {
     const next = await updateHunt(hunt.id, {
       title: title.trim() || hunt.title,
       source: source.trim(),
       inSequence: order === 'sequence',
-      series: series.trim() ? series.trim().toUpperCase() : null,
+      series: seriesOrNull(series),
     });
     onSaved?.(next);
     setEditing(false);
@@ -91,22 +86,7 @@ export function DetailsBlock({ hunt, onSaved }: { hunt: HuntDetail; onSaved?: (h
       {saving.message ? <Notice tone="error">{saving.message}</Notice> : null}
       <Field label="Title" value={title} onChangeText={setTitle} error={saving.fields.title} testID="details-title" />
       <Field label="Where the notes came from (optional)" value={source} onChangeText={setSource} error={saving.fields.source} testID="details-source" />
-      <ChoiceRow
-        label="The notes are"
-        options={NOTE_ORDER_CHOICES}
-        value={order}
-        onChange={(value) => setOrder(value === 'sequence' ? 'sequence' : 'circulated')}
-        testID="details-in-sequence"
-      />
-      <Field
-        label="Series on the notes (optional)"
-        value={series}
-        onChangeText={setSeries}
-        placeholder="e.g. 2017A"
-        autoCapitalize="characters"
-        error={saving.fields.series}
-        testID="details-series"
-      />
+      <HuntNotesFields order={order} onOrder={setOrder} series={series} onSeries={setSeries} seriesError={saving.fields.series} testPrefix="details" />
       <View style={styles.actions}>
         <Button label="Save details" busy={saving.busy} onPress={() => void saving.submit()} testID="save-details" />
         <Button
@@ -116,7 +96,7 @@ export function DetailsBlock({ hunt, onSaved }: { hunt: HuntDetail; onSaved?: (h
             setTitle(hunt.title);
             setSource(hunt.source);
             setSeries(hunt.series ?? '');
-            setOrder(hunt.inSequence ? 'sequence' : 'circulated');
+            setOrder(noteOrderOf(hunt.inSequence));
             saving.setMessage(null);
             setEditing(false);
           }}
