@@ -211,7 +211,7 @@ run_migrations() {
 # The web export is slow (about a minute cold), so it only runs when a client file changed.
 ensure_web_export() {
   local stamp="dist/.strapsift-export"
-  if [ -f "$stamp" ] && [ -z "$(find app src shared assets app.json babel.config.js package-lock.json scripts/web-export.sh scripts/web \
+  if [ -f "$stamp" ] && [ -z "$(find app src shared assets app.json babel.config.js metro.config.js package-lock.json scripts/web-export.sh scripts/web \
         -newer "$stamp" -type f -print -quit 2>/dev/null)" ]; then
     return 0
   fi

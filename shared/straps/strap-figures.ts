@@ -67,3 +67,19 @@ export function balanceOf(notesBack: number): StrapStatus {
   if (notesBack > NOTES_PER_STRAP) return { balance: 'over', by: notesBack - NOTES_PER_STRAP, label: `${notesBack - NOTES_PER_STRAP} over` };
   return { balance: 'complete', by: 0, label: 'complete' };
 }
+
+/**
+ * The strap sheet's closing count: how many straps go back with exactly 100, with the straps not yet
+ * opened said apart (they go back as they came, so they count, but "9 of 10 complete" after two notes
+ * would read as work done).
+ *
+ * @example
+ * strapsBackLine([{ searched: 2, pulled: 1, swappedIn: 0, shortOver: 0, notesBack: 99 }, { searched: 0, pulled: 0, swappedIn: 0, shortOver: 0, notesBack: 100 }])
+ * // '1 of 2 straps go back with 100 (1 not started)'
+ */
+export function strapsBackLine(rows: ReadonlyArray<StrapCounts & { searched: number; note?: string | null; notesBack: number }>): string {
+  const withHundred = rows.filter((row) => row.notesBack === NOTES_PER_STRAP).length;
+  const notStarted = rows.filter((row) => !isTouched(row)).length;
+  const noun = rows.length === 1 ? 'strap goes' : 'straps go';
+  return `${withHundred} of ${rows.length} ${noun} back with ${NOTES_PER_STRAP}${notStarted ? ` (${notStarted} not started)` : ''}`;
+}

@@ -56,7 +56,15 @@ describe('the strap sheet editor', () => {
     expect(screen.getByLabelText('Strap 1: complete')).toBeTruthy();
     expect(screen.getByLabelText('Strap 2: 2 short')).toBeTruthy();
     expect(screen.getByTestId('strap-totals').textContent).toBe(
-      '237 searched · 3 pulled · 1 swapped in · 298 notes back · 2 of 3 straps complete',
+      '237 searched · 3 pulled · 1 swapped in · 298 notes back · 2 of 3 straps go back with 100',
+    );
+  });
+
+  it('when most straps of a hunt are not opened yet, then the closing count says so instead of calling them complete', () => {
+    render(<StrapSheetEditor sheet={sheetOf([strap(1, 2, 1), strap(2, 0, 0), strap(3, 0, 0)])} onSave={vi.fn()} canEdit wide={false} />);
+    // Strap 1: 100 received, 1 pulled, none swapped in: 99 go back (100-note straps, common practice).
+    expect(screen.getByTestId('strap-totals').textContent).toBe(
+      '2 searched · 1 pulled · 0 swapped in · 299 notes back · 2 of 3 straps go back with 100 (2 not started)',
     );
   });
 

@@ -182,6 +182,31 @@ describe('Hunts: crew, closing and deleting', () => {
     }
   });
 
+  it('when the owner learns the series and that the notes are new and in sequence after starting, then the details are saved and shown after a reload', async () => {
+    const call = await demo();
+    const huntId = await huntWithNotes(call, `Details later ${Date.now()}`);
+    const browser = await openBrowser(PHONE);
+    const { page } = browser;
+    try {
+      await signInAsDemo(page);
+      await page.goto(`${baseUrl()}/hunts/${huntId}`);
+      await expect(page.getByTestId('hunt-details').textContent()).resolves.toContain('circulated, in no order');
+      await page.getByTestId('edit-details').click();
+      await page.getByTestId('details-series').fill('2017a');
+      await page.getByTestId('details-in-sequence').getByText('New, in sequence').click();
+      await page.getByTestId('save-details').click();
+      await page.getByText('Saved. Readings and the chance figures use the new details.').waitFor();
+      const saved = await call<{ series: string | null; inSequence: boolean; source: string }>(`/hunts/${huntId}`);
+      expect(saved.body).toMatchObject({ series: '2017A', inSequence: true, source: 'Larkspur Valley CU, Mill Street branch' });
+      await page.reload();
+      const details = await page.getByTestId('hunt-details').textContent();
+      expect(details).toContain('new, in sequence');
+      expect(details).toContain('2017A');
+    } finally {
+      await browser.close();
+    }
+  });
+
   it('when crew open the shared hunt, then they can square straps but not close or delete it', async () => {
     const browser = await openBrowser(PHONE);
     const { page } = browser;
@@ -193,6 +218,7 @@ describe('Hunts: crew, closing and deleting', () => {
       await expect(page.getByTestId('manage-section').textContent()).resolves.toContain('You are crew in Wren Halloway');
       await expect(page.getByTestId('delete-hunt').count()).resolves.toBe(0);
       await expect(page.getByTestId('close-hunt').count()).resolves.toBe(0);
+      await expect(page.getByTestId('edit-details').count()).resolves.toBe(0);
       await expect(page.getByLabel(/^Remove .* from the crew$/).count()).resolves.toBe(0);
       await page.getByTestId('strap-edit-6').waitFor();
       await shootWhole(page, 'test-results/screenshots/hunt-crew-view-phone.png');

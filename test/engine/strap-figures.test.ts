@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { balanceOf, isTouched, strapFigures, strapStatus } from '../../shared/straps';
+import { balanceOf, isTouched, strapFigures, strapStatus, strapsBackLine } from '../../shared/straps';
 
 // A strap is 100 notes (common practice for US straps of small notes); the figures are worked by hand.
 describe('strapFigures', () => {
@@ -51,5 +51,18 @@ describe('isTouched and strapStatus: one definition of a strap the hunter has wo
     expect(strapStatus({ ...blank, searched: 100, pulled: 2, notesBack: 98 })).toEqual({ balance: 'short', by: 2, label: '2 short' });
     expect(balanceOf(100)).toEqual({ balance: 'complete', by: 0, label: 'complete' });
     expect(balanceOf(101)).toEqual({ balance: 'over', by: 1, label: '1 over' });
+  });
+});
+
+describe('strapsBackLine', () => {
+  const row = (searched: number, pulled: number, swappedIn = 0, shortOver = 0) => ({ searched, pulled, swappedIn, shortOver, notesBack: 100 + shortOver - pulled + swappedIn });
+
+  it('when one strap of ten is opened with one note pulled, then it says 9 of 10 go back with 100 and 9 are not started', () => {
+    expect(strapsBackLine([row(2, 1), ...Array.from({ length: 9 }, () => row(0, 0))])).toBe('9 of 10 straps go back with 100 (9 not started)');
+  });
+
+  it('when every strap is opened and squared, then nothing is said of straps not started', () => {
+    expect(strapsBackLine([row(100, 2, 2), row(101, 1, 0, 1)])).toBe('2 of 2 straps go back with 100');
+    expect(strapsBackLine([row(100, 1)])).toBe('0 of 1 strap goes back with 100');
   });
 });

@@ -14,6 +14,7 @@ import { useSiftSession } from '../sift/use-sift-session';
 import { useHunt } from './api';
 import { ChanceBlock } from './sections/chance-block';
 import { CrewBlock } from './sections/crew-block';
+import { DetailsBlock } from './sections/details-block';
 import { FindsSection } from './sections/finds-section';
 import { ManageBlock } from './sections/manage-block';
 import { StrapSheetSection } from './sections/strap-sheet-section';
@@ -55,6 +56,13 @@ export function HuntScreen() {
   const hits = <FindsSection hunt={data} wide={isWide} crew={crew} />;
   const side = (
     <>
+      <DetailsBlock
+        hunt={data}
+        onSaved={(next) => {
+          // Sift reads the series from the hunt it keeps on this device; keep that copy current too.
+          if (sift.hunt?.id === next.id) void sift.selectHunt({ id: next.id, title: next.title, denomination: next.denomination, series: next.series });
+        }}
+      />
       <CrewBlock hunt={data} onLeft={() => router.replace('/hunts')} />
       <ManageBlock hunt={data} />
     </>

@@ -106,7 +106,7 @@ export function KeepersScreen() {
       {pages.isLoading ? <Text tone="muted">Loading your keepers…</Text> : null}
       {pages.data && shown.length === 0 ? (
         <Notice tone="info" title={all.length ? 'Nothing matches' : 'No keepers yet'}>
-          {all.length ? 'Try another search or filter.' : 'Pull a note on the Sift keypad, or add one you already own with “Add a keeper”.'}
+          {all.length ? 'Try another search or filter.' : 'A note you pull in Sift joins them when you tap “Add to keepers” beside it under the last notes. A note you already own: “Add a keeper”.'}
         </Notice>
       ) : null}
       <View style={isWide ? styles.table : styles.cards} testID="keeper-list">

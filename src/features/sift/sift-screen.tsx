@@ -8,7 +8,6 @@ import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { PageHeading } from '@/components/ui/page-heading';
 import { Text } from '@/components/ui/text';
-import { uuid } from '@/lib/uuid';
 import { useScanQueue } from '@/lib/storage/use-scan-queue';
 import { useTheme } from '@/theme/theme-provider';
 import { useLayout } from '@/theme/use-layout';
@@ -26,9 +25,10 @@ import { SyncBadge } from './components/sync-badge';
 import { Trail } from './components/trail';
 import { markEighthKey, measureReadingPainted } from './paint-timing';
 import { nearMissLines } from './reading-view';
-import { emptyEntry, entryReducer, isComplete, SERIAL_LENGTH } from './serial-entry';
+import { emptyEntry, entryReducer, isComplete, SERIAL_LENGTH, type EntryAction, type SerialEntry } from './serial-entry';
 import type { TrailNote } from './strap-count';
 import { KEY_HINTS, useHardwareKeys } from './use-hardware-keys';
+import { TYPED, useNoteLog, type EntrySource } from './use-note-log';
 import { useSiftSession } from './use-sift-session';
 import type { FrameVerdict } from '@shared/ocr/acceptance';
 import { useCameraSettings } from '../camera/camera-settings';
@@ -38,9 +38,6 @@ import { loggedKey, useLoggedSerials } from '../camera/use-logged-serials';
 // The camera, its recogniser and the model load only when the hunter first opens the camera.
 const CameraPanel = lazy(() => import('../camera/camera-panel').then((module) => ({ default: module.CameraPanel })));
 
-/** How the note now in the cells came in: typed, or read by the camera (with its confidence and suffix). */
-type EntrySource = { method: 'keypad' } | { method: 'camera'; confidence: number; suffix: string; unsure: number[]; logged: boolean };
-const TYPED: EntrySource = { method: 'keypad' };
 
 export function SiftScreen() {
   const theme = useTheme();
@@ -49,12 +46,28 @@ export function SiftScreen() {
   const watch = useWatchForReading();
   const { queue, snapshot } = useScanQueue();
   const [choosing, setChoosing] = useState(false);
-  const [entry, dispatch] = useReducer(entryReducer, emptyEntry);
+  const [entry, dispatchEntry] = useReducer(entryReducer, emptyEntry);
+  // Handlers read the entry from here, not from the last render: keys can arrive faster than React paints.
+  const entryRef = useRef<SerialEntry>(emptyEntry);
+  const dispatch = useCallback((action: EntryAction) => {
+    entryRef.current = entryReducer(entryRef.current, action);
+    dispatchEntry(action);
+  }, []);
   const [flash, setFlash] = useState<{ tone: 'ok' | 'error' | 'info'; text: string } | null>(null);
-  const [starRunText, setStarRunText] = useState('');
+  const [starRunText, setStarRunTextState] = useState('');
+  const starRunRef = useRef('');
+  const setStarRunText = useCallback((text: string) => {
+    starRunRef.current = text;
+    setStarRunTextState(text);
+  }, []);
   const starRunSize = entry.star ? parseStarRun(starRunText) : null;
   const [mode, setMode] = useState<'keypad' | 'camera'>('keypad');
-  const [source, setSource] = useState<EntrySource>(TYPED);
+  const [source, setSourceState] = useState<EntrySource>(TYPED);
+  const sourceRef = useRef<EntrySource>(TYPED);
+  const setSource = useCallback((next: EntrySource) => {
+    sourceRef.current = next;
+    setSourceState(next);
+  }, []);
   const [cameraStatus, setCameraStatus] = useState<string | null>(null);
   const camera = useCameraSettings();
 
@@ -93,73 +106,62 @@ export function SiftScreen() {
 
   const typeDigit = useCallback(
     (digit: string) => {
-      if (entry.digits.length === SERIAL_LENGTH - 1) markEighthKey();
-      if (source.method === 'camera' && source.logged) {
+      const from = sourceRef.current;
+      if (from.method === 'camera' && from.logged) {
         // The camera already logged what the cells show: a typed digit starts the next note.
         dispatch({ type: 'clear' });
         setSource(TYPED);
       }
+      if (entryRef.current.digits.length === SERIAL_LENGTH - 1) markEighthKey();
       dispatch({ type: 'digit', digit });
     },
-    [entry.digits.length, source],
+    [dispatch, setSource],
   );
+
+  const { enqueue } = useNoteLog({ queue, session, logged, weights, watch });
 
   /** The one path for every note, typed or read: the device queue first, then the strap count. */
   const logEntry = useCallback(
-    async (note: typeof entry, from: EntrySource, runSize: number | null = null) => {
-      const result = read(`${note.prefix}${note.digits}`, {
-        weights,
-        watch,
-        star: note.star,
-        denomination: session.hunt?.denomination,
-        series: session.hunt?.series ?? undefined,
-        starRunSize: runSize,
-      });
-      if (!result.ok || !queue || !session.count || !session.hunt) return null;
-      const id = uuid();
-      const now = new Date().toISOString();
-      const strap = session.count.strap;
-      const suffix = from.method === 'camera' && !note.star ? from.suffix : '';
-      await queue.add({
-        id,
-        huntId: session.hunt.id,
-        strap,
-        serial: `${note.prefix}${note.digits}${suffix}`,
-        star: result.star,
-        pulled: note.pulled,
-        scannedAt: now,
-        entryMethod: from.method,
-        ...(from.method === 'camera' ? { cameraConfidence: Math.round(from.confidence * 1000) / 1000 } : {}),
-        ...(result.star && runSize !== null ? { starRunSize: runSize } : {}),
-      });
-      await logged.add(loggedKey(note));
-      const completed = await session.log({
-        id,
-        strap,
-        digits: note.digits,
-        prefix: note.prefix,
-        star: result.star,
-        pulled: note.pulled,
-        patterns: result.patterns,
-        points: result.score.points,
-        keep: result.score.keep,
-        loggedAt: now,
-      });
-      setFlash(completed ? { tone: 'ok', text: `Strap ${completed} done: 100 notes searched. Band it; strap ${completed + 1} is next.` } : null);
-      return result;
+    async (note: SerialEntry, from: EntrySource, runSize: number | null = null) => {
+      try {
+        const stored = await enqueue(note, from, runSize);
+        if (!stored) return null;
+        const done = stored.completedStrap;
+        if (done) setFlash({ tone: 'ok', text: `Strap ${done} done: 100 notes searched. Band it; strap ${done + 1} is next.` });
+        if (from.method === 'camera' && stored.reading.patterns.length > 0) announceFind(camera.settings);
+        return stored.reading;
+      } catch {
+        // The note never reached the device store: give it back to the cells rather than lose it.
+        setFlash({ tone: 'error', text: `Could not save ${note.prefix}${note.digits} on this device. It is back in the cells; log it again.` });
+        if (!entryRef.current.digits) dispatch({ type: 'restore', entry: note });
+        return null;
+      }
     },
-    [weights, watch, queue, session, logged],
+    [enqueue, camera.settings, dispatch],
   );
 
-  const logNote = useCallback(async () => {
-    if (!reading || !reading.ok || (source.method === 'camera' && source.logged)) return;
-    const result = await logEntry(entry, source, starRunSize);
-    if (!result) return;
+  /** Enter or Log: the cells clear at once and the note joins the line, so the next key starts the next note. */
+  const logNote = useCallback(() => {
+    const note = entryRef.current;
+    const from = sourceRef.current;
+    if (!isComplete(note) || (from.method === 'camera' && from.logged)) return;
+    const runSize = note.star ? parseStarRun(starRunRef.current) : null;
+    const check = read(`${note.prefix}${note.digits}`, {
+      weights,
+      watch,
+      star: note.star,
+      denomination: session.hunt?.denomination,
+      series: session.hunt?.series ?? undefined,
+      starRunSize: runSize,
+    });
+    // A serial the engine refuses stays in the cells, where the reading says why.
+    if (!check.ok) return;
+    setFlash(null);
     setStarRunText('');
-    if (source.method === 'camera' && result.patterns.length > 0) announceFind(camera.settings);
     dispatch({ type: 'clear' });
     setSource(TYPED);
-  }, [reading, entry, source, logEntry, camera.settings, starRunSize]);
+    void logEntry(note, from, runSize);
+  }, [weights, watch, session.hunt?.denomination, session.hunt?.series, dispatch, setSource, setStarRunText, logEntry]);
 
   // Verdicts arrive one per frame; a ref keeps the handler current without restarting the camera.
   const onVerdict = useRef<(verdict: FrameVerdict) => void>(() => undefined);
@@ -180,9 +182,8 @@ export function SiftScreen() {
       return;
     }
     setSource({ ...from, logged: true });
-    void logEntry(note, from).then((result) => {
-      if (result && result.patterns.length > 0) announceFind(camera.settings);
-    });
+    setFlash(null);
+    void logEntry(note, from);
   };
   const handleVerdict = useCallback((verdict: FrameVerdict) => onVerdict.current(verdict), []);
 
@@ -214,7 +215,7 @@ export function SiftScreen() {
     {
       onDigit: typeDigit,
       onDelete: () => dispatch({ type: 'delete' }),
-      onLog: () => void logNote(),
+      onLog: logNote,
       onToggleStar: () => dispatch({ type: 'toggle-star' }),
       onTogglePulled: () => dispatch({ type: 'toggle-pulled' }),
       onUndo: () => void undoLast(),
@@ -324,8 +325,8 @@ export function SiftScreen() {
         <Button
           label={cameraLogged ? 'Logged' : 'Log'}
           accessibilityLabel={cameraLogged ? 'This note is logged' : 'Log this note'}
-          onPress={() => void logNote()}
-          disabled={!reading?.ok || !count || cameraLogged}
+          onPress={logNote}
+          disabled={!reading?.ok || cameraLogged}
           style={styles.cameraLog}
           testID="camera-log"
         />
@@ -338,12 +339,12 @@ export function SiftScreen() {
     <Keypad
       onDigit={typeDigit}
       onDelete={() => dispatch({ type: 'delete' })}
-      onLog={() => void logNote()}
+      onLog={logNote}
       onToggleStar={() => dispatch({ type: 'toggle-star' })}
       onTogglePulled={() => dispatch({ type: 'toggle-pulled' })}
       star={entry.star}
       pulled={entry.pulled}
-      canLog={!!reading?.ok && !!count && !cameraLogged}
+      canLog={!!reading?.ok && !cameraLogged}
       canDelete={entry.digits.length > 0}
       showShortcuts={isWide}
     />

@@ -125,5 +125,8 @@ export function useSiftSession(sheet: SheetStart | undefined) {
     [save],
   );
 
-  return { loaded, reload, hunt, huntId, count, selectHunt, log, undo, moveToStrap, markPulledHandled };
+  /** The count as of the last change, not the last render: keys can outrun the paint. */
+  const peek = useCallback(() => countRef.current, []);
+
+  return { loaded, reload, hunt, huntId, count, peek, selectHunt, log, undo, moveToStrap, markPulledHandled };
 }

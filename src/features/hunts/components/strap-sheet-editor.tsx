@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { StrapRow, StrapSheet, UpdateStrapRequest } from '@shared/contracts';
-import { balanceOf, strapStatus } from '@shared/straps';
+import { balanceOf, strapStatus, strapsBackLine } from '@shared/straps';
 import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
 import { DataTable, type Column } from '@/components/ui/data-table';
@@ -331,7 +331,7 @@ export function StrapSheetEditor({ sheet, onSave, canEdit, wide }: StrapSheetEdi
       ) : null}
       <Text tone="muted" testID="strap-totals">
         {formatCount(totals.searched)} searched · {formatCount(totals.pulled)} pulled · {formatCount(totals.swappedIn)} swapped in ·{' '}
-        {formatCount(totals.notesBack)} notes back · {totals.completeStraps} of {totals.straps} straps complete
+        {formatCount(totals.notesBack)} notes back · {strapsBackLine(sheet.straps)}
       </Text>
     </View>
   );

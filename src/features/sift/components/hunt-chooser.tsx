@@ -13,6 +13,7 @@ import { kv } from '@/lib/storage/kv';
 import { useTheme } from '@/theme/theme-provider';
 import { radius, space } from '@/theme/tokens';
 import { createHunt, useHunts } from '../../hunts/api';
+import { HuntNotesFields, seriesOrNull, type NoteOrder } from '../../hunts/components/hunt-notes-fields';
 
 const LAST_SOURCE = 'strapsift.sift.lastSource';
 const LAST_DENOMINATION = 'strapsift.sift.lastDenomination';
@@ -28,11 +29,6 @@ const STRAP_CHOICES = [
   { value: 40, label: 'Brick · 40' },
 ] as const;
 
-const NOTE_ORDER_CHOICES = [
-  { value: 'circulated', label: 'Circulated, in no order' },
-  { value: 'sequence', label: 'New, in sequence' },
-] as const;
-
 /** Continue an open hunt, or start today's in one tap with the source remembered from last time. */
 export function HuntChooser({ onChosen, onCancel }: { onChosen(hunt: HuntSummary): void; onCancel?: () => void }) {
   const theme = useTheme();
@@ -41,7 +37,7 @@ export function HuntChooser({ onChosen, onCancel }: { onChosen(hunt: HuntSummary
   const [source, setSource] = useState('');
   const [denomination, setDenomination] = useState<number>(1);
   const [plannedStraps, setPlannedStraps] = useState<number>(10);
-  const [inSequence, setInSequence] = useState<'circulated' | 'sequence'>('circulated');
+  const [order, setOrder] = useState<NoteOrder>('circulated');
   const [series, setSeries] = useState('');
 
   useEffect(() => {
@@ -55,9 +51,9 @@ export function HuntChooser({ onChosen, onCancel }: { onChosen(hunt: HuntSummary
       source: source.trim(),
       denomination,
       plannedStraps,
-      inSequence: inSequence === 'sequence',
+      inSequence: order === 'sequence',
       // Readings then check each serial's prefix against the series (e.g. its series letter).
-      ...(series.trim() ? { series: series.trim().toUpperCase() } : {}),
+      series: seriesOrNull(series),
     });
     // Remembered once given; an empty source never wipes out the last one.
     if (source.trim()) await kv.set(LAST_SOURCE, source.trim());
@@ -109,25 +105,7 @@ export function HuntChooser({ onChosen, onCancel }: { onChosen(hunt: HuntSummary
           onChange={(value) => setDenomination(Number(value))}
         />
         <ChoiceRow label="Planned straps" options={STRAP_CHOICES} value={plannedStraps} onChange={(value) => setPlannedStraps(Number(value))} />
-        <ChoiceRow
-          label="The notes are"
-          options={NOTE_ORDER_CHOICES}
-          value={inSequence}
-          onChange={(value) => setInSequence(value === 'sequence' ? 'sequence' : 'circulated')}
-          testID="hunt-in-sequence"
-        />
-        <Text variant="caption" tone="faint">
-          New notes in sequence are compared with every run of the same length; circulated notes as independent draws.
-        </Text>
-        <Field
-          label="Series on the notes (optional)"
-          value={series}
-          onChangeText={setSeries}
-          placeholder="e.g. 2017A"
-          autoCapitalize="characters"
-          error={fields.series}
-          testID="hunt-series"
-        />
+        <HuntNotesFields order={order} onOrder={setOrder} series={series} onSeries={setSeries} seriesError={fields.series} testPrefix="hunt" />
         {fields.plannedStraps ? <Text tone="danger">Planned straps {fields.plannedStraps}</Text> : null}
         <View style={styles.actions}>
           <Button label="Start hunt" busy={busy} onPress={() => void submit()} testID="start-hunt" style={styles.grow} />

@@ -1,7 +1,7 @@
 import { Pressable, StyleSheet, View } from 'react-native';
 import { Text } from '@/components/ui/text';
 import { useTheme } from '@/theme/theme-provider';
-import { fonts, radius, space } from '@/theme/tokens';
+import { fonts, radius } from '@/theme/tokens';
 import { NOTES_PER_STRAP } from '../strap-count';
 
 interface StrapBarProps {
@@ -23,7 +23,7 @@ export function StrapBar({ strap, inStrap, onPrevious, onNext }: StrapBarProps) 
             ‹
           </Text>
         </Pressable>
-        <Text style={styles.text} accessibilityLabel={`Strap ${strap}, ${inStrap} of ${NOTES_PER_STRAP} notes`} testID="strap-progress">
+        <Text style={styles.text} numberOfLines={1} accessibilityLabel={`Strap ${strap}, ${inStrap} of ${NOTES_PER_STRAP} notes`} testID="strap-progress">
           strap {strap} · {inStrap} of {NOTES_PER_STRAP}
         </Text>
         <Pressable accessibilityRole="button" accessibilityLabel="Next strap" onPress={onNext} style={styles.step} hitSlop={8}>
@@ -41,9 +41,10 @@ export function StrapBar({ strap, inStrap, onPrevious, onNext }: StrapBarProps) 
 
 const styles = StyleSheet.create({
   wrap: { gap: 4, flex: 1, minWidth: 150 },
-  row: { flexDirection: 'row', alignItems: 'center', gap: space.xs },
-  text: { fontFamily: fonts.monoMedium, fontSize: 14, fontVariant: ['tabular-nums'] },
-  step: { paddingHorizontal: space.xs, minWidth: 28, alignItems: 'center' },
+  row: { flexDirection: 'row', alignItems: 'center', gap: 2 },
+  // One line on a 390 px phone beside the Camera and Undo buttons, up to "strap 40 · 100 of 100".
+  text: { fontFamily: fonts.monoMedium, fontSize: 13, fontVariant: ['tabular-nums'], flexShrink: 1 },
+  step: { paddingHorizontal: 2, minWidth: 24, alignItems: 'center' },
   track: { height: 4, borderRadius: radius.pill, overflow: 'hidden' },
   fill: { height: 4, borderRadius: radius.pill },
 });
