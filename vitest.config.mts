@@ -1,7 +1,7 @@
 import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'vitest/config';
 import { BaseSequencer, type TestSpecification } from 'vitest/node';
-import { START_RANK, laneOf } from './test/support/e2e-lane-plan';
+import { START_RANK, laneOf } from './test/support/e2e-lane-plan.mjs';
 
 const alias = {
   '@shared': fileURLToPath(new URL('./shared', import.meta.url)),

@@ -2,10 +2,10 @@ import { mkdir, readdir, readFile, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, beforeEach } from 'vitest';
-import { laneOf } from './e2e-lane-plan';
+import { laneOf } from './e2e-lane-plan.mjs';
 
 /**
- * Each browser-test file takes its lane (e2e-lane-plan.ts) before it starts and gives it back at the end:
+ * Each browser-test file takes its lane (e2e-lane-plan.mts) before it starts and gives it back at the end:
  * - the "demo" mutex, held by one "demo" or "alone" file at a time;
  * - the machine, held shared by every "own" and "demo" file and alone by an "alone" file.
  * An "alone" file takes the demo mutex first, then the machine, and no file waits for the demo mutex while
