@@ -1,7 +1,7 @@
 import { mkdir, readdir, readFile, rm, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { afterAll, beforeAll, beforeEach } from 'vitest';
+import { afterAll, beforeAll } from 'vitest';
 import { laneOf } from './e2e-lane-plan.mjs';
 
 /**
@@ -95,23 +95,15 @@ async function takeLanes(file: string): Promise<void> {
 }
 
 // The first argument is the fixture context (vitest insists on a destructuring pattern there); the file is in the second.
-// A file may wait for the whole of one or two other files before it starts.
+// A file may wait for the whole of one or two other files before it starts. Lanes are taken before the file's own
+// preparation too (the camera's card video takes about 20 s of drawing): taken later, that drawing would share the
+// machine with a file that is timing the page.
 // eslint-disable-next-line no-empty-pattern
 beforeAll(async ({}, suite) => {
-  if (laneOf(suite.file.filepath) !== 'alone') await takeLanes(suite.file.filepath);
-}, 600_000);
-
-// An "alone" file takes its lanes just before its first test, so its own preparation (the camera's card video,
-// about 20 s of drawing) runs beside the other files instead of while the machine waits for it.
-let taken = false;
-beforeEach(async ({ task }) => {
-  if (taken || laneOf(task.file.filepath) !== 'alone') return;
-  taken = true;
-  await takeLanes(task.file.filepath);
+  await takeLanes(suite.file.filepath);
 }, 600_000);
 
 afterAll(async () => {
   for (const give of release.reverse()) await give();
   release = [];
-  taken = false;
 });
