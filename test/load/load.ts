@@ -162,6 +162,9 @@ function apiProcess(url: string, workers: number): ApiProcess {
   );
 }
 
+/** Phase starts on stderr with the time, so a CPU sampler running beside can be read phase by phase. */
+const phase = (name: string) => console.error(`${new Date().toISOString().slice(11, 19)} ${name} …`);
+
 const hunterAddress = (index: number) => `10.1.${Math.floor(index / 250)}.${(index % 250) + 1}`;
 
 async function runLoad(): Promise<LoadFigures> {
@@ -191,14 +194,17 @@ async function runLoad(): Promise<LoadFigures> {
 
     // Three seconds unmeasured first: the server's JIT warms up and the sign-ins' hashing has drained.
     await pacedHunters(api.baseUrl, sessions, RATE_PER_HUNTER, 3000);
+    phase(`paced mix, ${HUNTERS * RATE_PER_HUNTER} a second offered`);
     const paced = await pacedHunters(api.baseUrl, sessions, RATE_PER_HUNTER, seconds * 1000);
     const latencies = paced.latencies;
     // Then the ceiling: the same mix with every connection sending as fast as answers come back.
+    phase(`ceiling with ${WORKERS} processes`);
     const ceiling = await measureCeiling(api.baseUrl, sessions, Math.min(10, seconds));
     // The same ceiling with one process on the same database and sessions, to see what the second one buys.
     await api.stop('SIGTERM');
     const single = apiProcess(url, 1);
     await single.start();
+    phase('ceiling with one process');
     const oneProcess = await measureCeiling(single.baseUrl, sessions, Math.min(10, seconds)).finally(() => single.stop('SIGTERM'));
     const all = Object.values(latencies).flat().sort((a, b) => a - b);
     const byKind: LoadFigures['byKind'] = {};
@@ -233,6 +239,7 @@ async function main(): Promise<void> {
   console.log(JSON.stringify(load, null, 2));
   let faults: FaultOutcome | null = null;
   if (!flags['no-faults']) {
+    phase('faults');
     console.error(`faults: 20 hunters, 10,000 notes, ${WORKERS} app processes, one worker killed twice, PostgreSQL restarted once …`);
     faults = await runFaultScenario({ clients: 20, totalScans: 10_000, apiPort: 8198, pgPort: 54398, workers: WORKERS });
     console.log(JSON.stringify(faults, null, 2));
