@@ -160,7 +160,7 @@ async function main(): Promise<void> {
     // 2. The paced mix, as npm run load sends it, against this one process.
     await pacedHunters(api.baseUrl, sessions, rate, 3000);
     const pgPids = await postgresPids(process.env.PG_ADMIN_URL ?? url.replace(/\/[^/]*$/, '/postgres'));
-    const pgBefore = pgPids.map(cpuSeconds);
+    const pgBefore = pgPids.map((p) => cpuSeconds(p));
     const appBefore = cpuSeconds(pid);
     const appSystemBefore = cpuSeconds(pid, 'system');
     const selfBefore = process.cpuUsage();
