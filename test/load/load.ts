@@ -16,6 +16,7 @@ import { createDataSource } from '../../server/db/data-source';
 import { ApiProcess } from '../support/fault-rig';
 import { writeDocSection } from '../support/doc-section';
 import { runFaultScenario, type FaultOutcome } from '../support/fault-scenario';
+import { pacedHunters } from './paced-hunters';
 
 const root = resolve(__dirname, '../..');
 const USAGE = `usage: npm run load -- [options]
@@ -161,6 +162,9 @@ function apiProcess(url: string, workers: number): ApiProcess {
   );
 }
 
+/** Phase starts on stderr with the time, so a CPU sampler running beside can be read phase by phase. */
+const phase = (name: string) => console.error(`${new Date().toISOString().slice(11, 19)} ${name} …`);
+
 const hunterAddress = (index: number) => `10.1.${Math.floor(index / 250)}.${(index % 250) + 1}`;
 
 async function runLoad(): Promise<LoadFigures> {
@@ -190,14 +194,19 @@ async function runLoad(): Promise<LoadFigures> {
 
     // Three seconds unmeasured first: the server's JIT warms up and the sign-ins' hashing has drained.
     await pacedHunters(api.baseUrl, sessions, RATE_PER_HUNTER, 3000);
+    phase(`paced mix, ${HUNTERS * RATE_PER_HUNTER} a second offered`);
     const paced = await pacedHunters(api.baseUrl, sessions, RATE_PER_HUNTER, seconds * 1000);
     const latencies = paced.latencies;
     // Then the ceiling: the same mix with every connection sending as fast as answers come back.
+    phase(`ceiling with ${WORKERS} processes`);
     const ceiling = await measureCeiling(api.baseUrl, sessions, Math.min(10, seconds));
     // The same ceiling with one process on the same database and sessions, to see what the second one buys.
     await api.stop('SIGTERM');
     const single = apiProcess(url, 1);
     await single.start();
+    // Warmed up like the first: without it the one-process figure also paid for a cold JIT and pool.
+    await pacedHunters(single.baseUrl, sessions, RATE_PER_HUNTER, 3000);
+    phase('ceiling with one process');
     const oneProcess = await measureCeiling(single.baseUrl, sessions, Math.min(10, seconds)).finally(() => single.stop('SIGTERM'));
     const all = Object.values(latencies).flat().sort((a, b) => a - b);
     const byKind: LoadFigures['byKind'] = {};
@@ -223,59 +232,6 @@ async function runLoad(): Promise<LoadFigures> {
   }
 }
 
-/**
- * The latency figure: each of the 50 hunters runs its own loop over real HTTP (keep-alive fetch),
- * sending its next request on a fixed pace and timing each from send to the last byte. Unlike a
- * rate-limited benchmark connection, the wait for the next slot is never counted as latency.
- */
-async function pacedHunters(
-  baseUrl: string,
-  sessions: { token: string; huntId: string; index: number }[],
-  ratePerHunter: number,
-  durationMs: number,
-): Promise<{ latencies: Record<string, number[]>; requests: number; failures: number }> {
-  const latencies: Record<string, number[]> = { batch: [], hunts: [], tally: [], straps: [] };
-  let requests = 0;
-  let failures = 0;
-  const end = Date.now() + durationMs;
-  const gap = 1000 / ratePerHunter;
-  await Promise.all(
-    sessions.map(async (hunter) => {
-      let serial = 30_000_000 + hunter.index * 100_000;
-      let step = 0;
-      // Spread the hunters' first requests over one gap so they don't all fire together.
-      await new Promise((done) => setTimeout(done, Math.random() * gap));
-      while (Date.now() < end) {
-        const kind = (['batch', 'hunts', 'tally', 'straps'] as const)[step++ % 4];
-        const headers = { authorization: `Bearer ${hunter.token}`, 'content-type': 'application/json' };
-        const started = performance.now();
-        let response: Response;
-        if (kind === 'batch') {
-          const scans = Array.from({ length: 20 }, () => ({
-            id: randomUUID(),
-            huntId: hunter.huntId,
-            strap: 1,
-            serial: String((serial += 1)),
-            scannedAt: new Date().toISOString(),
-          }));
-          response = await fetch(`${baseUrl}/api/scans/batch`, { method: 'POST', headers, body: JSON.stringify({ scans }) });
-        } else {
-          const path = kind === 'hunts' ? '/api/hunts' : `/api/hunts/${hunter.huntId}/${kind}`;
-          response = await fetch(`${baseUrl}${path}`, { headers });
-        }
-        await response.arrayBuffer();
-        const took = performance.now() - started;
-        requests += 1;
-        if (!response.ok) failures += 1;
-        latencies[kind].push(took);
-        const wait = gap - took;
-        if (wait > 0) await new Promise((done) => setTimeout(done, wait));
-      }
-    }),
-  );
-  return { latencies, requests, failures };
-}
-
 const ms = (n: number) => `${n.toFixed(1)} ms`;
 
 async function main(): Promise<void> {
@@ -285,6 +241,7 @@ async function main(): Promise<void> {
   console.log(JSON.stringify(load, null, 2));
   let faults: FaultOutcome | null = null;
   if (!flags['no-faults']) {
+    phase('faults');
     console.error(`faults: 20 hunters, 10,000 notes, ${WORKERS} app processes, one worker killed twice, PostgreSQL restarted once …`);
     faults = await runFaultScenario({ clients: 20, totalScans: 10_000, apiPort: 8198, pgPort: 54398, workers: WORKERS });
     console.log(JSON.stringify(faults, null, 2));
@@ -306,7 +263,7 @@ async function main(): Promise<void> {
       `- All requests at ${HUNTERS * RATE_PER_HUNTER} a second: p50 ${ms(load.all.p50)}, p95 ${ms(load.all.p95)}, p99 ${ms(load.all.p99)} (target p95 ≤ 50 ms at 300 a second: ${load.all.p95 <= 50 && HUNTERS * RATE_PER_HUNTER >= 300 ? 'met' : 'not met'}).`,
       `- Sign-in, all 50 at the same moment (argon2id m = 19 MiB, t = 2, p = 1 on libuv's pool, timed apart from the loop): p50 ${ms(load.signIn.p50)}, p95 ${ms(load.signIn.p95)} (target p95 ≤ 2 s: ${load.signIn.p95 <= 2000 ? 'met' : 'not met'}).`,
       `- Ceiling with ${WORKERS} processes (autocannon, 50 connections sending as fast as answers come back, same mix, ${Math.min(10, load.seconds)} s): ${load.ceiling.perSecond.toFixed(0)} requests a second, p50 ${ms(load.ceiling.p50)}, p95 ${ms(load.ceiling.p95)} (target ≥ 700: ${load.ceiling.perSecond >= 700 ? 'met' : 'not met'}).`,
-      `- The same ceiling with one process, same database and sessions: ${load.oneProcess.perSecond.toFixed(0)} requests a second, p50 ${ms(load.oneProcess.p50)}, p95 ${ms(load.oneProcess.p95)}. ${WORKERS} processes give ×${gain.toFixed(2)}.`,
+      `- The same ceiling with one process, same database and sessions, after the same 3 s warm-up: ${load.oneProcess.perSecond.toFixed(0)} requests a second, p50 ${ms(load.oneProcess.p50)}, p95 ${ms(load.oneProcess.p95)}. ${WORKERS} processes give ×${gain.toFixed(2)}.`,
       '',
       '| request | count | p50 | p95 | p99 |',
       '| --- | --- | --- | --- | --- |',

@@ -10,6 +10,7 @@ export interface HuntRow {
   source: string;
   denomination: number;
   plannedStraps: number;
+  inSequence: boolean;
   status: HuntStatus;
   startedAt: Date;
   closedAt: Date | null;
@@ -26,7 +27,7 @@ export interface HuntAccess {
  */
 export async function huntAccess(db: DataSource | EntityManager, huntId: string, userId: string): Promise<HuntAccess> {
   const rows: HuntAccessRow[] = await db.query(
-    `SELECT h.id, h.owner_id, h.title, h.source, h.denomination, h.planned_straps, h.status, h.started_at, h.closed_at, m.role
+    `SELECT h.id, h.owner_id, h.title, h.source, h.denomination, h.planned_straps, h.in_sequence, h.status, h.started_at, h.closed_at, m.role
        FROM hunts h JOIN hunt_members m ON m.hunt_id = h.id AND m.user_id = $2
       WHERE h.id = $1`,
     [huntId, userId],
@@ -44,6 +45,7 @@ interface HuntAccessRow {
   source: string;
   denomination: number;
   planned_straps: number;
+  in_sequence: boolean;
   status: HuntStatus;
   started_at: Date;
   closed_at: Date | null;
@@ -60,6 +62,7 @@ function toHuntAccess(row: HuntAccessRow): HuntAccess {
       source: row.source,
       denomination: row.denomination,
       plannedStraps: row.planned_straps,
+      inSequence: row.in_sequence,
       status: row.status,
       startedAt: row.started_at,
       closedAt: row.closed_at ?? null,

@@ -12,7 +12,8 @@ export function huntsRoutes(hunts: HuntsService, requireAuth: RequestHandler): R
     '/hunts',
     requireAuth,
     route(async (req, res) => {
-      res.json(await hunts.list(currentUser(req).id, parse(huntListQuery, req.query)));
+      const user = currentUser(req);
+      res.json(await hunts.list(user.id, parse(huntListQuery, req.query), user.weights));
     }),
   );
   router.post(

@@ -4,6 +4,7 @@ import { afterCursor, decodeCursor, keysetPage, timeIdCursor } from '../../lib/c
 import { NON_LOW_MASK, idsOf, int, iso } from '../../lib/patterns';
 import { huntAccess, requireOwner } from '../crew/hunt-access';
 import { HuntMemberEntity, type MemberRole } from '../crew/hunt-member.entity';
+import type { WeightTable } from '../../../shared/engine';
 import type { WeightsService } from '../weights/weights.service';
 import { HuntEntity, type HuntStatus } from './hunt.entity';
 
@@ -34,7 +35,8 @@ export class HuntsService {
     private readonly weights: WeightsService,
   ) {}
 
-  async list(userId: string, query: HuntListQuery): Promise<HuntList> {
+  /** `weights`: the active table when the caller holds it already (requireAuth reads it with the sign-in). */
+  async list(userId: string, query: HuntListQuery, weights?: WeightTable): Promise<HuntList> {
     const after = decodeCursor(query.cursor, timeIdCursor);
     const params: unknown[] = [userId];
     const where = ['m.user_id = $1'];
@@ -53,7 +55,7 @@ export class HuntsService {
       params,
     );
     const { page, nextCursor } = keysetPage(rows, query.limit, (last) => [last.started_at.toISOString(), last.id]);
-    return { items: await this.summarise(userId, page), nextCursor };
+    return { items: await this.summarise(userId, page, weights), nextCursor };
   }
 
   async get(userId: string, huntId: string): Promise<HuntDetail> {
@@ -115,43 +117,44 @@ export class HuntsService {
     return this.get(userId, huntId);
   }
 
-  /** Figures for a page of hunts in three set-based queries, whatever the page size. */
-  private async summarise(userId: string, rows: HuntListRow[]): Promise<HuntSummary[]> {
+  /** Figures for a page of hunts in one statement (counts and best find per hunt), whatever the page size. */
+  private async summarise(userId: string, rows: HuntListRow[], activeWeights?: WeightTable): Promise<HuntSummary[]> {
     if (rows.length === 0) return [];
     const ids = rows.map((row) => row.id);
-    const weights = await this.weights.activeWeights(userId);
-    const [stats, best] = await Promise.all([
-      this.dataSource.query(
-        `SELECT hunt_id,
-                count(*)::int AS notes,
-                count(*) FILTER (WHERE (pattern_mask & $2) <> 0 OR value <= $3)::int AS hits,
-                count(*) FILTER (WHERE keep)::int AS keeps,
-                count(*) FILTER (WHERE pulled)::int AS pulled,
-                count(DISTINCT strap)::int AS straps,
-                max(scanned_at) AS last_scan_at
-           FROM scans WHERE hunt_id = ANY($1::uuid[])
-          GROUP BY hunt_id`,
-        [ids, NON_LOW_MASK, weights.lowLimit],
-      ) as Promise<Array<Record<string, unknown>>>,
-      this.dataSource.query(
-        `SELECT DISTINCT ON (hunt_id) hunt_id, id, serial, digits, pattern_mask, points
-           FROM scans WHERE hunt_id = ANY($1::uuid[]) AND points > 0
-          ORDER BY hunt_id, points DESC, scanned_at ASC, id ASC`,
-        [ids],
-      ) as Promise<Array<Record<string, unknown>>>,
-    ]);
-    const statsBy = new Map(stats.map((row) => [row.hunt_id as string, row]));
+    const weights = activeWeights ?? (await this.weights.activeWeights(userId));
+    const figures: Array<Record<string, unknown>> = await this.dataSource.query(
+      `SELECT ids.hunt_id, f.notes, f.hits, f.keeps, f.pulled, f.straps, f.last_scan_at,
+              b.id AS best_id, b.serial AS best_serial, b.digits AS best_digits, b.pattern_mask AS best_mask, b.points AS best_points
+         FROM unnest($1::uuid[]) AS ids(hunt_id)
+         CROSS JOIN LATERAL (
+           SELECT count(*)::int AS notes,
+                  count(*) FILTER (WHERE (pattern_mask & $2) <> 0 OR value <= $3)::int AS hits,
+                  count(*) FILTER (WHERE keep)::int AS keeps,
+                  count(*) FILTER (WHERE pulled)::int AS pulled,
+                  count(DISTINCT strap)::int AS straps,
+                  max(scanned_at) AS last_scan_at
+             FROM scans WHERE hunt_id = ids.hunt_id) f
+         LEFT JOIN LATERAL (
+           SELECT id, serial, digits, pattern_mask, points
+             FROM scans WHERE hunt_id = ids.hunt_id AND points > 0
+            ORDER BY points DESC, scanned_at ASC, id ASC
+            LIMIT 1) b ON true`,
+      [ids, NON_LOW_MASK, weights.lowLimit],
+    );
+    const statsBy = new Map(figures.map((row) => [row.hunt_id as string, row]));
     const bestBy = new Map<string, BestFind>(
-      best.map((row) => [
-        row.hunt_id as string,
-        {
-          scanId: row.id as string,
-          serial: row.serial as string,
-          digits: row.digits as string,
-          patterns: idsOf(row.pattern_mask as number),
-          points: Number(row.points),
-        },
-      ]),
+      figures
+        .filter((row) => row.best_id !== null)
+        .map((row) => [
+          row.hunt_id as string,
+          {
+            scanId: row.best_id as string,
+            serial: row.best_serial as string,
+            digits: row.best_digits as string,
+            patterns: idsOf(row.best_mask as number),
+            points: Number(row.best_points),
+          },
+        ]),
     );
     return rows.map((row) => {
       const s = statsBy.get(row.id);

@@ -16,16 +16,18 @@ export function scansRoutes(scans: ScansService, requireAuth: RequestHandler, li
       // The envelope and ids are checked here; each scan's other fields are checked one by one in the
       // service, so a single bad note is rejected on its own instead of failing the batch.
       const { scans: items } = parse(scanBatchEnvelope, req.body);
-      const userId = currentUser(req).id;
+      const user = currentUser(req);
       // Notes sent a day per account (shared by every app process): generous, but a runaway script stops.
-      // Counted as sent, in one round trip before the insert; a retried batch counts again, which the
-      // allowance's margin absorbs.
-      await limits.scansPerDay.consume(
-        userId,
+      // Counted as sent; a retried batch counts again, which the allowance's margin absorbs. The upsert
+      // runs beside the batch's reads (one round trip less to wait for) and the service stores nothing
+      // until it has passed; the catch only keeps an early refusal from being reported as unhandled.
+      const allowance = limits.scansPerDay.consume(
+        user.id,
         `This account has sent ${limits.scansPerDay.rule.points.toLocaleString('en-US')} notes in a day, the most it takes; the rest stay queued on your device and go up later`,
         items.length,
       );
-      res.json(await scans.storeBatch(userId, items));
+      allowance.catch(() => undefined);
+      res.json(await scans.storeBatch(user.id, items, user.weights, allowance));
     }),
   );
   router.delete(

@@ -5,7 +5,8 @@ import { afterCursor, decodeCursor, keysetPage, timeIdCursor } from '../../lib/c
 import { idsOf, maskOf } from '../../lib/patterns';
 import { huntAccess } from '../crew/hunt-access';
 import type { HuntStatus } from '../hunts/hunt.entity';
-import type { WeightsService } from '../weights/weights.service';
+import type { WatchPattern, WeightTable } from '../../../shared/engine';
+import type { ReadingContext, WeightsService } from '../weights/weights.service';
 import { storedReading, type StoredReading } from './scan-reading';
 
 interface VisibleHunt {
@@ -91,9 +92,15 @@ export class ScansService {
    * Stores each new note exactly once. The device's id is the primary key and the insert is
    * `ON CONFLICT DO NOTHING RETURNING id`, so a retried batch, or two copies racing each other, store a
    * note once: the first writer stores it, everyone else is told it is a duplicate. Problems with one
-   * note reject that note alone.
+   * note reject that note alone. `weights` is the active table when the caller holds it (saves a round
+   * trip); `allowance` a limit check already under way, which must pass before anything is stored.
    */
-  async storeBatch(userId: string, scans: ReadonlyArray<{ id: string } & Record<string, unknown>>): Promise<ScanBatchResponse> {
+  async storeBatch(
+    userId: string,
+    scans: ReadonlyArray<{ id: string } & Record<string, unknown>>,
+    weights?: WeightTable,
+    allowance?: Promise<void>,
+  ): Promise<ScanBatchResponse> {
     const rejected: RejectedScan[] = [];
     const duplicates: string[] = [];
     const seen = new Set<string>();
@@ -110,17 +117,9 @@ export class ScansService {
     }
 
     const huntIds = [...new Set(candidates.map((c) => c.input.huntId))];
-    const [hunts, context] = await Promise.all([
-      huntIds.length
-        ? (this.dataSource.query(
-            `SELECT h.id, h.status, h.closed_at
-               FROM hunts h JOIN hunt_members m ON m.hunt_id = h.id AND m.user_id = $1
-              WHERE h.id = ANY($2::uuid[])`,
-            [userId, huntIds],
-          ) as Promise<VisibleHunt[]>)
-        : Promise.resolve([] as VisibleHunt[]),
-      this.weights.readingContext(userId),
-    ]);
+    const { hunts, context } = await this.batchContext(userId, huntIds, weights);
+    // The daily allowance was asked for beside the reads above; nothing is stored before it answers.
+    await allowance;
     const huntBy = new Map(hunts.map((hunt) => [hunt.id, hunt]));
 
     const prepared: Prepared[] = [];
@@ -164,6 +163,36 @@ export class ScansService {
     const stored = prepared.length ? await this.insert(userId, prepared) : new Set<string>();
     for (const p of prepared) if (!stored.has(p.id)) duplicates.push(p.id);
     return { stored: prepared.filter((p) => stored.has(p.id)).map((p) => p.id), duplicates, rejected: stillRejected };
+  }
+
+  /**
+   * The batch's hunts the caller may log into and the reading context, in one round trip when the caller
+   * already holds the active weight table (requireAuth reads it with the sign-in); else as before.
+   */
+  private async batchContext(userId: string, huntIds: string[], weights?: WeightTable): Promise<{ hunts: VisibleHunt[]; context: ReadingContext }> {
+    if (!weights) {
+      const [hunts, context] = await Promise.all([this.visibleHunts(userId, huntIds), this.weights.readingContext(userId)]);
+      return { hunts, context };
+    }
+    const rows: Array<{ hunts: Array<{ id: string; status: HuntStatus; closed_at: string | null }> | null; watch: WatchPattern[] | null }> = await this.dataSource.query(
+      `SELECT (SELECT json_agg(json_build_object('id', h.id, 'status', h.status, 'closed_at', h.closed_at))
+                 FROM hunts h JOIN hunt_members m ON m.hunt_id = h.id AND m.user_id = $1
+                WHERE h.id = ANY($2::uuid[])) AS hunts,
+              (SELECT json_agg(w.pattern ORDER BY w.created_at, w.id) FROM watch_patterns w WHERE w.user_id = $1) AS watch`,
+      [userId, huntIds],
+    );
+    const hunts = (rows[0]?.hunts ?? []).map((hunt) => ({ id: hunt.id, status: hunt.status, closed_at: hunt.closed_at === null ? null : new Date(hunt.closed_at) }));
+    return { hunts, context: { weights, watch: rows[0]?.watch ?? [] } };
+  }
+
+  private async visibleHunts(userId: string, huntIds: string[]): Promise<VisibleHunt[]> {
+    if (huntIds.length === 0) return [];
+    return this.dataSource.query(
+      `SELECT h.id, h.status, h.closed_at
+         FROM hunts h JOIN hunt_members m ON m.hunt_id = h.id AND m.user_id = $1
+        WHERE h.id = ANY($2::uuid[])`,
+      [userId, huntIds],
+    );
   }
 
   private async knownIds(ids: string[]): Promise<Set<string>> {

@@ -43,8 +43,8 @@ export class StrapsService {
   constructor(private readonly dataSource: DataSource) {}
 
   async sheet(userId: string, huntId: string): Promise<StrapSheet> {
-    const { hunt } = await huntAccess(this.dataSource, huntId, userId);
-    const [counts, recorded] = await Promise.all([this.scanCounts(huntId), this.recorded(huntId)]);
+    // The counts run beside the access check; their answer is only used once access is confirmed.
+    const [{ hunt }, { counts, recorded }] = await Promise.all([huntAccess(this.dataSource, huntId, userId), this.strapFacts(huntId)]);
     const highest = Math.max(hunt.plannedStraps, ...counts.keys(), ...recorded.keys());
     const straps: StrapRow[] = [];
     for (let number = 1; number <= highest; number++) straps.push(strapRow(number, counts.get(number), recorded.get(number)));
@@ -82,31 +82,38 @@ export class StrapsService {
          updated_at = now()`,
       [huntId, number, change.swappedIn ?? null, change.shortOver ?? null, change.note || null, change.note !== undefined],
     );
-    const [counts, recorded] = await Promise.all([this.scanCounts(huntId, number), this.recorded(huntId, number)]);
+    const { counts, recorded } = await this.strapFacts(huntId, number);
     return strapRow(number, counts.get(number), recorded.get(number));
   }
 
-  private async scanCounts(huntId: string, number?: number): Promise<Map<number, ScanCounts>> {
-    const rows: Array<Record<string, unknown>> = await this.dataSource.query(
-      `SELECT strap, count(*)::int AS searched, count(*) FILTER (WHERE pulled)::int AS pulled,
-              min(scanned_at) AS first, max(scanned_at) AS last
+  /** Per strap, the notes logged and what the hunter recorded, in one statement (one strap, or all). */
+  private async strapFacts(huntId: string, number?: number): Promise<{ counts: Map<number, ScanCounts>; recorded: Map<number, Recorded> }> {
+    const rows: Array<{
+      kind: 'counts' | 'recorded';
+      number: number;
+      searched: number | null;
+      pulled: number | null;
+      first: Date | null;
+      last: Date | null;
+      swapped_in: number | null;
+      short_over: number | null;
+      note: string | null;
+    }> = await this.dataSource.query(
+      `SELECT 'counts' AS kind, strap AS number, count(*)::int AS searched, count(*) FILTER (WHERE pulled)::int AS pulled,
+              min(scanned_at) AS first, max(scanned_at) AS last, NULL::int AS swapped_in, NULL::int AS short_over, NULL::text AS note
          FROM scans WHERE hunt_id = $1 AND ($2::int IS NULL OR strap = $2)
-        GROUP BY strap`,
+        GROUP BY strap
+       UNION ALL
+       SELECT 'recorded', number, NULL, NULL, NULL, NULL, swapped_in, short_over, note
+         FROM straps WHERE hunt_id = $1 AND ($2::int IS NULL OR number = $2)`,
       [huntId, number ?? null],
     );
-    return new Map(
-      rows.map((row) => [
-        row.strap as number,
-        { searched: int(row.searched), pulled: int(row.pulled), first: row.first as Date | null, last: row.last as Date | null },
-      ]),
-    );
-  }
-
-  private async recorded(huntId: string, number?: number): Promise<Map<number, Recorded>> {
-    const rows: Array<{ number: number; swapped_in: number; short_over: number; note: string | null }> = await this.dataSource.query(
-      `SELECT number, swapped_in, short_over, note FROM straps WHERE hunt_id = $1 AND ($2::int IS NULL OR number = $2)`,
-      [huntId, number ?? null],
-    );
-    return new Map(rows.map((row) => [row.number, { swappedIn: row.swapped_in, shortOver: row.short_over, note: row.note }]));
+    const counts = new Map<number, ScanCounts>();
+    const recorded = new Map<number, Recorded>();
+    for (const row of rows) {
+      if (row.kind === 'counts') counts.set(row.number, { searched: int(row.searched), pulled: int(row.pulled), first: row.first, last: row.last });
+      else recorded.set(row.number, { swappedIn: row.swapped_in ?? 0, shortOver: row.short_over ?? 0, note: row.note });
+    }
+    return { counts, recorded };
   }
 }

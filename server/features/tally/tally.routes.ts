@@ -12,14 +12,16 @@ export function tallyRoutes(tally: TallyService, requireAuth: RequestHandler): R
     '/hunts/:id/tally',
     requireAuth,
     route(async (req, res) => {
-      res.json(await tally.hunt(currentUser(req).id, parse(idParams, req.params).id));
+      const user = currentUser(req);
+      res.json(await tally.hunt(user.id, parse(idParams, req.params).id, user.weights));
     }),
   );
   router.get(
     '/tally',
     requireAuth,
     route(async (req, res) => {
-      res.json(await tally.period(currentUser(req).id, parse(tallyQuery, req.query)));
+      const user = currentUser(req);
+      res.json(await tally.period(user.id, parse(tallyQuery, req.query), user.weights));
     }),
   );
   return router;

@@ -1,11 +1,11 @@
 import type { DataSource } from 'typeorm';
 import { combinedHits } from '../../../shared/engine';
-import type { LowLimit, PatternId, TallyPart } from '../../../shared/engine';
+import type { LowLimit, PatternId, TallyPart, WeightTable } from '../../../shared/engine';
 import { runEndFor } from '../../../shared/trade';
 import type { HuntTally, PeriodTally, TallyQuery } from '../../../shared/contracts/tally';
 import { HttpError } from '../../lib/errors';
 import { NON_LOW_MASK, PATTERN_BIT, PATTERN_IDS, PATTERN_NAMES, int } from '../../lib/patterns';
-import { huntAccess } from '../crew/hunt-access';
+import { huntAccess, type HuntAccess } from '../crew/hunt-access';
 import type { WeightsService } from '../weights/weights.service';
 
 type Figures = Omit<HuntTally, 'huntId'>;
@@ -91,22 +91,27 @@ export class TallyService {
     private readonly weights: WeightsService,
   ) {}
 
-  async hunt(userId: string, huntId: string): Promise<HuntTally> {
-    const [, weights] = await Promise.all([huntAccess(this.dataSource, huntId, userId), this.weights.activeWeights(userId)]);
-    const [rows, hunts]: Array<Array<Record<string, unknown>>> = await Promise.all([
-      this.dataSource.query(`SELECT ${figureColumns('$2')} FROM scans WHERE hunt_id = $1`, [huntId, weights.lowLimit]),
-      this.dataSource.query(`SELECT in_sequence, denomination FROM hunts WHERE id = $1`, [huntId]),
+  /**
+   * `weights`, when the caller already holds the active table (requireAuth reads it with the sign-in),
+   * saves a round trip; the hunt's own facts come with the access check.
+   */
+  async hunt(userId: string, huntId: string, weights?: WeightTable): Promise<HuntTally> {
+    const active = weights ?? (await this.weights.activeWeights(userId));
+    // The count runs beside the access check; its answer is only used once access is confirmed.
+    const [access, rows]: [HuntAccess, Array<Record<string, unknown>>] = await Promise.all([
+      huntAccess(this.dataSource, huntId, userId),
+      this.dataSource.query(`SELECT ${figureColumns('$2')} FROM scans WHERE hunt_id = $1`, [huntId, active.lowLimit]),
     ]);
-    const part = partOf({ ...hunts[0], notes: rows[0]?.notes });
-    return { huntId, ...figures(rows[0], weights.lowLimit, [part]) };
+    const part = partOf({ in_sequence: access.hunt.inSequence, denomination: access.hunt.denomination, notes: rows[0]?.notes });
+    return { huntId, ...figures(rows[0], active.lowLimit, [part]) };
   }
 
   /** Over every hunt the caller belongs to (crew's notes included), optionally within a period. */
-  async period(userId: string, query: TallyQuery): Promise<PeriodTally> {
+  async period(userId: string, query: TallyQuery, activeWeights?: WeightTable): Promise<PeriodTally> {
     const from = bound(query.from, false);
     const to = bound(query.to, true);
     if (from && to && from > to) throw new HttpError(400, 'invalid', 'Some fields need attention', { to: 'must not be before from' });
-    const weights = await this.weights.activeWeights(userId);
+    const weights = activeWeights ?? (await this.weights.activeWeights(userId));
     const scope = `s.hunt_id IN (SELECT hunt_id FROM hunt_members WHERE user_id = $1)
        AND ($2::timestamptz IS NULL OR s.scanned_at >= $2) AND ($3::timestamptz IS NULL OR s.scanned_at <= $3)`;
     const params = [userId, from?.toISOString() ?? null, to?.toISOString() ?? null, weights.lowLimit];
