@@ -1,3 +1,4 @@
+import { createHash } from 'node:crypto';
 import type { Request, RequestHandler } from 'express';
 import { RateLimiterPostgres, RateLimiterRes } from 'rate-limiter-flexible';
 import type { DataSource } from 'typeorm';
@@ -33,6 +34,13 @@ export type LimitRules = typeof DEFAULT_LIMITS;
 export const tooManyRequests = (message: string, retryAfterSeconds: number) =>
   new HttpError(429, 'too_many_requests', message, undefined, Math.max(1, Math.ceil(retryAfterSeconds)));
 
+/**
+ * The table's key column holds 255 characters and the store adds the limit's name in front, so a key
+ * that could be long (an e-mail address typed by anyone, up to 254 characters) is stored as its hash.
+ */
+const MAX_PLAIN_KEY = 128;
+export const storedKey = (key: string): string => (key.length <= MAX_PLAIN_KEY ? key : `sha256:${createHash('sha256').update(key).digest('hex')}`);
+
 /** One named counter over the shared table. */
 export class Limit {
   private limiter: RateLimiterPostgres | null = null;
@@ -63,7 +71,7 @@ export class Limit {
   /** Spends points; over the limit, throws a 429 carrying the wait. */
   async consume(key: string, message: string, points = 1): Promise<void> {
     try {
-      await this.store().consume(key, points);
+      await this.store().consume(storedKey(key), points);
     } catch (error) {
       if (error instanceof RateLimiterRes) throw tooManyRequests(message, error.msBeforeNext / 1000);
       throw error;
@@ -72,18 +80,18 @@ export class Limit {
 
   /** Throws a 429 if the key has already used its points, without spending one; answers the points used so far. */
   async check(key: string, message: string): Promise<number> {
-    const state = await this.store().get(key);
+    const state = await this.store().get(storedKey(key));
     if (state && state.consumedPoints >= this.rule.points) throw tooManyRequests(message, state.msBeforeNext / 1000);
     return state?.consumedPoints ?? 0;
   }
 
   /** Counts a hit that may go over the limit without refusing this request (the refusal comes with the next). */
   async penalise(key: string, points = 1): Promise<void> {
-    await this.store().penalty(key, points);
+    await this.store().penalty(storedKey(key), points);
   }
 
   async clear(key: string): Promise<void> {
-    await this.store().delete(key);
+    await this.store().delete(storedKey(key));
   }
 }
 

@@ -82,6 +82,16 @@ describe('POST /api/auth/forgot', () => {
     expect(response.status).toBe(400);
     expect(response.body.error.fields).toHaveProperty('email');
   });
+
+  it('when the e-mail is 400 characters long, then 400 naming it, and again (the per-account counter takes a key of any length)', async () => {
+    // Found by the bad-input fuzzer: the counter's key (its name, then the address) outgrew the table's 255-character key column.
+    const email = `${'x'.repeat(388)}@strapsift.test`;
+    for (const _ of [1, 2]) {
+      const response = await request(api.app).post('/api/auth/forgot').send({ email });
+      expect(response.status).toBe(400);
+      expect(response.body.error.fields).toHaveProperty('email');
+    }
+  });
 });
 
 describe('POST /api/auth/reset', () => {
