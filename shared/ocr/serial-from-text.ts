@@ -4,6 +4,8 @@ import { parseSerial } from '../engine';
 export interface OcrSymbol {
   text: string;
   confidence: number;
+  /** Where the recogniser drew the character, in the pixels of the picture it read. */
+  box?: { left: number; top: number; right: number; bottom: number };
 }
 
 /** A serial read from a line of recognised text, with how sure the recogniser was of each part. */

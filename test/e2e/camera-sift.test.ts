@@ -50,10 +50,23 @@ describe('Sift with the camera (Chromium fake camera)', () => {
     const title = `Camera strap ${Date.now()}`;
     try {
       // Long tasks on the main thread, from the first script on.
+      // Long tasks on the main thread, from the first script on, and for each long animation frame the
+      // scripts that ran in it (Chromium's long-animation-frame entries), so a failure says what was slow.
       await page.addInitScript(() => {
         const tasks: number[] = [];
-        (window as unknown as { __longTasks: number[] }).__longTasks = tasks;
+        const frames: string[] = [];
+        Object.assign(window, { __longTasks: tasks, __longFrames: frames });
         new PerformanceObserver((list) => list.getEntries().forEach((entry) => tasks.push(entry.duration))).observe({ type: 'longtask', buffered: true });
+        type Script = { invoker: string; sourceFunctionName: string; sourceURL: string; duration: number };
+        new PerformanceObserver((list) =>
+          list.getEntries().forEach((entry) => {
+            if (entry.duration <= 50) return;
+            const scripts = ((entry as unknown as { scripts: Script[] }).scripts ?? []).map(
+              (script) => `${script.invoker} ${script.sourceFunctionName}@${script.sourceURL.split('/').pop()} ${Math.round(script.duration)}ms`,
+            );
+            frames.push(`${Math.round(entry.duration)}ms: ${scripts.join('; ') || 'no script (style, layout, paint or GC)'}`);
+          }),
+        ).observe({ type: 'long-animation-frame', buffered: true });
       });
       await signInAsDemo(page);
       const switcher = page.getByTestId('switch-hunt');
@@ -74,6 +87,7 @@ describe('Sift with the camera (Chromium fake camera)', () => {
       await page.getByTestId('keypad').waitFor();
       await page.evaluate(() => {
         (window as unknown as { __longTasks: number[] }).__longTasks.length = 0;
+        (window as unknown as { __longFrames: string[] }).__longFrames.length = 0;
         performance.clearMeasures('camera-frame');
       });
 
@@ -99,6 +113,7 @@ describe('Sift with the camera (Chromium fake camera)', () => {
       // One pass only: the fake camera loops its file, so the camera is closed at the end of the strap.
       const frames = await page.evaluate(() => performance.getEntriesByName('camera-frame').map((entry) => entry.duration));
       const longTasks = await page.evaluate(() => (window as unknown as { __longTasks: number[] }).__longTasks.slice());
+      const longFrames = await page.evaluate(() => (window as unknown as { __longFrames: string[] }).__longFrames.slice());
       await page.screenshot({ path: 'test-results/screenshots/sift-camera-strap-done-phone.png' });
       await page.getByTestId('mode-switch').click();
       await page.getByTestId('sync-badge').click();
@@ -135,6 +150,7 @@ describe('Sift with the camera (Chromium fake camera)', () => {
         frameP95Ms: Math.round(sorted[Math.floor(sorted.length * 0.95)] ?? 0),
         longestTaskMs: Math.round(Math.max(0, ...longTasks)),
         longTasks: longTasks.filter((duration) => duration > 50).length,
+        longFrames,
         notesPerMinute: scans.length > 1 ? Math.round((scans.length - 1) / span) : 0,
         firstLoadGzipKb: Math.round(firstLoad / 100) / 10,
       };
