@@ -80,7 +80,10 @@ describe('Sift with the camera (Chromium fake camera)', () => {
       // First opening: the recogniser loads with a progress bar. Then back to the keypad and in again,
       // so the fake camera starts its file from the first card with the reader already warm.
       await page.getByTestId('mode-switch').click();
-      await page.getByTestId('camera-progress').waitFor({ timeout: 20_000 });
+      // A camera that cannot start shows its problem instead of the progress bar: fail with its words.
+      await page.getByTestId('camera-progress').or(page.getByTestId('camera-problem')).waitFor({ timeout: 20_000 });
+      const problem = page.getByTestId('camera-problem');
+      if (await problem.isVisible()) throw new Error(`the camera did not start: ${await problem.textContent()}`);
       await page.getByTestId('camera-progress').waitFor({ state: 'detached', timeout: 120_000 });
       await page.screenshot({ path: 'test-results/screenshots/sift-camera-phone.png' });
       await page.getByTestId('mode-switch').click();
@@ -89,6 +92,7 @@ describe('Sift with the camera (Chromium fake camera)', () => {
         (window as unknown as { __longTasks: number[] }).__longTasks.length = 0;
         (window as unknown as { __longFrames: string[] }).__longFrames.length = 0;
         performance.clearMeasures('camera-frame');
+        performance.clearMarks('camera-read');
       });
 
       await page.getByTestId('mode-switch').click();
@@ -113,6 +117,9 @@ describe('Sift with the camera (Chromium fake camera)', () => {
       // One pass only: the fake camera loops its file, so the camera is closed at the end of the strap.
       const frames = await page.evaluate(() => performance.getEntriesByName('camera-frame').map((entry) => entry.duration));
       const longTasks = await page.evaluate(() => (window as unknown as { __longTasks: number[] }).__longTasks.slice());
+      // Every frame's read and verdict, kept beside the figures to study misreads offline.
+      const reads = await page.evaluate(() => performance.getEntriesByName('camera-read').map((entry) => ({ at: Math.round(entry.startTime), ...(entry as PerformanceMark).detail })));
+      writeFileSync('test-results/camera-frames.json', `${JSON.stringify(reads)}\n`);
       const longFrames = await page.evaluate(() => (window as unknown as { __longFrames: string[] }).__longFrames.slice());
       await page.screenshot({ path: 'test-results/screenshots/sift-camera-strap-done-phone.png' });
       await page.getByTestId('mode-switch').click();
