@@ -31,6 +31,21 @@ async function loggedSoFar(page: Page): Promise<number> {
   return match ? (Number(match[1]) - 1) * 100 + Number(match[2]) : 0;
 }
 
+/**
+ * Switches Sift between keypad and camera and waits until it has. On this busy machine a click can land
+ * while the screen is still settling after the hunt starts and be lost, so a switch that did not happen
+ * within a few seconds is clicked again (the keypad is on screen exactly when Sift is in keypad mode).
+ */
+async function switchTo(page: Page, mode: 'camera' | 'keypad'): Promise<void> {
+  const keypad = page.getByTestId('keypad');
+  for (let attempt = 0; attempt < 4; attempt++) {
+    await page.getByTestId('mode-switch').click();
+    const switched = mode === 'keypad' ? keypad.waitFor({ timeout: 5_000 }) : keypad.waitFor({ state: 'detached', timeout: 5_000 });
+    if (await switched.then(() => true, () => false)) return;
+  }
+  throw new Error(`Sift did not switch to the ${mode}`);
+}
+
 interface ServerScan {
   digits: string;
   prefix: string;
@@ -79,15 +94,22 @@ describe('Sift with the camera (Chromium fake camera)', () => {
 
       // First opening: the recogniser loads with a progress bar. Then back to the keypad and in again,
       // so the fake camera starts its file from the first card with the reader already warm.
-      await page.getByTestId('mode-switch').click();
-      // A camera that cannot start shows its problem instead of the progress bar: fail with its words.
-      await page.getByTestId('camera-progress').or(page.getByTestId('camera-problem')).waitFor({ timeout: 20_000 });
+      await switchTo(page, 'camera');
+      // A camera that cannot start shows its problem instead of the progress bar: fail with its words, and
+      // with what the page said, so a failure here names its cause.
+      const pageErrors: string[] = [];
+      page.on('pageerror', (error) => pageErrors.push(error.message));
+      page.on('console', (message) => message.type() === 'error' && pageErrors.push(message.text()));
       const problem = page.getByTestId('camera-problem');
-      if (await problem.isVisible()) throw new Error(`the camera did not start: ${await problem.textContent()}`);
+      const opened = await page.getByTestId('camera-progress').or(problem).waitFor({ timeout: 20_000 }).then(() => true, () => false);
+      if (!opened || (await problem.isVisible())) {
+        await page.screenshot({ path: 'test-results/screenshots/sift-camera-failed-phone.png' });
+        const said = opened ? await problem.textContent() : (await page.locator('body').innerText()).slice(0, 600);
+        throw new Error(`the camera did not start: ${said}\npage errors: ${pageErrors.join('\n') || 'none'}`);
+      }
       await page.getByTestId('camera-progress').waitFor({ state: 'detached', timeout: 120_000 });
       await page.screenshot({ path: 'test-results/screenshots/sift-camera-phone.png' });
-      await page.getByTestId('mode-switch').click();
-      await page.getByTestId('keypad').waitFor();
+      await switchTo(page, 'keypad');
       await page.evaluate(() => {
         (window as unknown as { __longTasks: number[] }).__longTasks.length = 0;
         (window as unknown as { __longFrames: string[] }).__longFrames.length = 0;
@@ -95,7 +117,7 @@ describe('Sift with the camera (Chromium fake camera)', () => {
         performance.clearMarks('camera-read');
       });
 
-      await page.getByTestId('mode-switch').click();
+      await switchTo(page, 'camera');
       const started = Date.now();
       let offlineAt: number | null = null;
       let onlineAgain = false;
@@ -122,7 +144,7 @@ describe('Sift with the camera (Chromium fake camera)', () => {
       writeFileSync('test-results/camera-frames.json', `${JSON.stringify(reads)}\n`);
       const longFrames = await page.evaluate(() => (window as unknown as { __longFrames: string[] }).__longFrames.slice());
       await page.screenshot({ path: 'test-results/screenshots/sift-camera-strap-done-phone.png' });
-      await page.getByTestId('mode-switch').click();
+      await switchTo(page, 'keypad');
       await page.getByTestId('sync-badge').click();
       await page.getByTestId('sync-text').filter({ hasText: 'All saved' }).waitFor({ timeout: 60_000 });
 

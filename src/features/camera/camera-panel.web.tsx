@@ -81,7 +81,7 @@ export function CameraPanel({ onVerdict, onClose, status }: CameraPanelProps) {
         acceptance = next.state;
         // What each frame read and what the rule made of it, for the browser test's record of a strap.
         const read = result.read;
-        performance.mark('camera-read', { detail: { verdict: next.verdict.kind, serial: read?.serial ?? null, confidence: read?.confidence ?? 0, digitConfidence: read?.digitConfidence ?? [] } });
+        performance.mark('camera-read', { detail: { verdict: next.verdict.kind, serial: read?.serial ?? null, reason: result.reason, confidence: read?.confidence ?? 0, digitConfidence: read?.digitConfidence ?? [] } });
         // The same hint as last frame re-renders nothing (React drops an unchanged string).
         setHint(hintFor(next.verdict, result.reason));
         verdictRef.current(next.verdict);
