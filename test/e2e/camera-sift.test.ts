@@ -191,19 +191,16 @@ describe('Sift with the camera (Chromium fake camera)', () => {
       writeFileSync('test-results/camera-e2e.json', `${JSON.stringify(figures, null, 2)}\n`);
       console.log('camera figures', figures);
 
-      // None doubled, and every note the device logged reached the server, offline halfway or not. The issue
-      // asks for all 100 with no misread; the last runs logged 100 with 2 misread (docs/PERFORMANCE.md,
-      // "Camera"), so this guards the measured figures, not the target: at least 95 of the strap's serials,
-      // in their order, and at most 2 that are not on the strap.
+      // The issue's target exactly: every note of the strap once, in the strap's order, none doubled, missed
+      // or misread, on the device and on the server after going offline halfway and back, at 60 notes a
+      // minute or more (the video shows a card every 0.9 s, so the camera keeps up or falls short).
       const expected = CARDS.map((card) => `${card.prefix}${card.digits}${card.star ? '*' : ''}`);
       const got = scans.map((scan) => `${scan.prefix}${scan.digits}${scan.star ? '*' : ''}`);
-      expect(new Set(got).size).toBe(got.length);
+      expect(got).toEqual(expected);
+      expect(deviceCount).toBe(CARDS.length);
       expect(scans.length).toBe(deviceCount);
-      const right = got.filter((serial) => expected.includes(serial));
-      expect(right.length).toBeGreaterThanOrEqual(95);
-      expect(got.length - right.length).toBeLessThanOrEqual(2);
-      const positions = right.map((serial) => expected.indexOf(serial));
-      expect(positions).toEqual([...positions].sort((a, b) => a - b));
+      expect(onlineAgain).toBe(true);
+      expect(figures.notesPerMinute).toBeGreaterThanOrEqual(60);
       expect(new Set(scans.map((scan) => scan.entryMethod))).toEqual(new Set(['camera']));
       for (const scan of scans) expect(scan.cameraConfidence).toBeGreaterThan(0);
       // Finds get their reading: the server's patterns are the engine's for each serial.
