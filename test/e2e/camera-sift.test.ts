@@ -116,7 +116,7 @@ describe('Sift with the camera (Chromium fake camera)', () => {
       await switchTo(page, 'keypad');
       // Sign-in and the first opening (the camera's code, its worker and the reader load) are kept apart
       // from the strap: the target is about the camera running.
-      const firstOpenLongTasks = await page.evaluate(() => (window as unknown as { __longFrames: string[] }).__longFrames.slice());
+      const firstOpenLongFrames = await page.evaluate(() => (window as unknown as { __longFrames: string[] }).__longFrames.slice());
       await page.evaluate(() => {
         (window as unknown as { __longTasks: number[] }).__longTasks.length = 0;
         (window as unknown as { __longFrames: string[] }).__longFrames.length = 0;
@@ -188,7 +188,7 @@ describe('Sift with the camera (Chromium fake camera)', () => {
         longestTaskMs: Math.round(Math.max(0, ...longTasks)),
         longTasks: longTasks.filter((duration) => duration > 50).length,
         longFrames,
-        firstOpenLongTasks,
+        firstOpenLongFrames,
         notesPerMinute: scans.length > 1 ? Math.round((scans.length - 1) / span) : 0,
         firstLoadGzipKb: Math.round(firstLoad / 100) / 10,
       };
