@@ -56,7 +56,7 @@ export function acceptFrame(state: AcceptanceState, read: SerialRead | null): { 
   // A hand, a blur or a glint can spoil one frame in the middle of a note: two agreeing frames out of three
   // still count (the fake-camera strap lost a note whose frames agreed eight times but never two in a row
   // above `agree`, the letter I being read at 0.5 to 0.8).
-  const agreeing = read.confidence >= ACCEPTANCE.agree ? state.recent.filter((seen) => seen?.serial === read.serial && seen.confidence >= ACCEPTANCE.agree) : [];
+  const agreeing = read.confidence >= ACCEPTANCE.agree ? state.recent.filter((seen): seen is SerialRead => seen?.serial === read.serial && seen.confidence >= ACCEPTANCE.agree) : [];
   // A serial within two digits (an edit or two) of the one just accepted is more often that same note
   // misread than a new one (measured on the fake-camera strap): it never counts alone and needs three
   // agreeing frames. A sequential strap's next note still comes in, a frame later. A one-letter prefix is
