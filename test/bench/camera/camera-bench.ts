@@ -76,7 +76,7 @@ async function main() {
     '## Camera',
     '',
     `Measured ${new Date().toISOString().slice(0, 10)} by \`tsx test/bench/camera/camera-bench.ts\` on ${os.cpus().length} × ${os.cpus()[0]?.model.trim()}, Node ${process.version}, in ${seconds.toFixed(0)} s; load average ${os.loadavg().map((v) => v.toFixed(2)).join(' / ')} at the end.`,
-    'Cards come from the seeded generator in `test/camera/cards` (invented serials in eight free fonts; the degraded set adds ±4° rotation, blur, hatching, uneven light, sensor noise, JPEG 35–70 and digits down to 18 px). "Accepted" is what one frame would do alone; the camera also accepts two agreeing frames.',
+    'Cards come from the seeded generator in `test/camera/cards` (invented serials in eight free fonts; the degraded set adds ±4° rotation, blur, hatching, uneven light, sensor noise, JPEG 35–70 and digits down to 18 px). "Accepted" is what one frame would do alone (0.95 sure, with agreement counted only between differently prepared pictures); the camera also accepts two of three agreeing frames (all three for a one-letter prefix).',
     '',
     table,
     '',
