@@ -22,7 +22,6 @@ export const CORE_FILES = ['tesseract-core-simd-lstm.wasm.js', 'tesseract-core-s
 interface SymbolLike {
   text: string;
   confidence: number;
-  bbox?: { x0: number; y0: number; x1: number; y1: number };
 }
 interface PageLike {
   blocks?: { paragraphs: { lines: { words: { symbols: SymbolLike[] }[] }[] }[] }[] | null;
@@ -35,10 +34,7 @@ export function symbolsOf(page: PageLike): OcrSymbol[] {
     for (const paragraph of block.paragraphs) {
       for (const line of paragraph.lines) {
         for (const word of line.words) {
-          for (const symbol of word.symbols) {
-            const box = symbol.bbox ? { left: symbol.bbox.x0, top: symbol.bbox.y0, right: symbol.bbox.x1, bottom: symbol.bbox.y1 } : undefined;
-            symbols.push({ text: symbol.text, confidence: symbol.confidence / 100, ...(box ? { box } : {}) });
-          }
+          for (const symbol of word.symbols) symbols.push({ text: symbol.text, confidence: symbol.confidence / 100 });
         }
       }
     }
