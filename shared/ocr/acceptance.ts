@@ -17,8 +17,8 @@ export interface AcceptanceState {
   lastAccepted: string | null;
   /** How many frames in a row before this one read `previous` (0 when it was the first). */
   streak: number;
-  /** The reads of the frames before this one, oldest first, at most `WINDOW - 1` (null: read nothing). */
-  recent: (SerialRead | null)[];
+  /** The reads of the frames before this one that read a serial, oldest first, at most `WINDOW - 1`. */
+  recent: SerialRead[];
 }
 
 export type FrameVerdict =
@@ -33,7 +33,7 @@ export type FrameVerdict =
 
 export const initialAcceptance: AcceptanceState = { previous: null, lastAccepted: null, streak: 0, recent: [] };
 
-/** Frames looked at together: this one and the two before it. */
+/** Frames that read a serial looked at together: this one and the two before it. */
 const WINDOW = 3;
 
 /**
@@ -48,15 +48,17 @@ const WINDOW = 3;
  * const second = acceptFrame(first.state, read);           // { verdict: { kind: 'accept', unsure: [] } }
  */
 export function acceptFrame(state: AcceptanceState, read: SerialRead | null): { state: AcceptanceState; verdict: FrameVerdict } {
+  // A frame that read nothing (motion, blur, a variant that missed) is no evidence either way: it neither
+  // counts nor breaks a run of agreeing frames (the fake-camera strap read J42861470W in every other frame).
+  if (!read) return { state: { ...state, previous: null, streak: 0 }, verdict: { kind: 'nothing' } };
   const recent = [...state.recent, read].slice(-(WINDOW - 1));
-  if (!read) return { state: { ...state, previous: null, streak: 0, recent }, verdict: { kind: 'nothing' } };
   const same = state.previous?.serial === read.serial;
   const streak = same ? state.streak + 1 : 0;
   if (read.serial === state.lastAccepted) return { state: { ...state, previous: read, streak, recent }, verdict: { kind: 'held', read } };
   // A hand, a blur or a glint can spoil one frame in the middle of a note: two agreeing frames out of three
   // still count (the fake-camera strap lost a note whose frames agreed eight times but never two in a row
   // above `agree`, the letter I being read at 0.5 to 0.8).
-  const agreeing = read.confidence >= ACCEPTANCE.agree ? state.recent.filter((seen): seen is SerialRead => seen?.serial === read.serial && seen.confidence >= ACCEPTANCE.agree) : [];
+  const agreeing = read.confidence >= ACCEPTANCE.agree ? state.recent.filter((seen) => seen.serial === read.serial && seen.confidence >= ACCEPTANCE.agree) : [];
   // A serial within two digits (an edit or two) of the one just accepted is more often that same note
   // misread than a new one (measured on the fake-camera strap): it never counts alone and needs three
   // agreeing frames. A sequential strap's next note still comes in, a frame later. A one-letter prefix is
