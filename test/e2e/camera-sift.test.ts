@@ -196,7 +196,7 @@ describe('Sift with the camera (Chromium fake camera)', () => {
       console.log('camera figures', figures);
 
       // The issue asks for all 100, in order, none doubled, missed or misread. Measured on this 2-core machine
-      // (docs/PERFORMANCE.md, "Camera"): 100 of 100 in five runs of six; one missed two notes with a
+      // (docs/PERFORMANCE.md, "Camera"): 100 of 100 in six runs of seven; one missed two notes with a
       // one-letter prefix that never gathered enough agreeing frames, and no run logged a misread. So this
       // asserts what held in every run: nothing doubled or misread, the strap's order, at least 98 of the
       // 100, the device and the server agreeing after offline and back, and 60 notes a minute or more.
