@@ -61,6 +61,13 @@ export function serialFromSymbols(symbols: readonly OcrSymbol[]): SerialReadResu
     .map((symbol) => ({ text: normalise(symbol.text), confidence: clamp01(symbol.confidence) }))
     .filter((symbol) => symbol.text.length === 1);
   if (chars.length === 0) return { ok: false, reason: 'nothing read' };
+  for (let k = 0; k + 1 < chars.length; k++) {
+    // A bold J's descender reads as a bracket without the whitelist, and with it the J is dropped (on 1,400
+    // generated cards, both ")" read just before the digits were a one-letter prefix J; nothing else was).
+    if (J_LIKE.has(chars[k]!.text) && isDigit(chars[k + 1]!.text) && (k === 0 || !isLetter(chars[k - 1]!.text))) {
+      chars[k] = { text: 'J', confidence: chars[k]!.confidence * GUESSED_LETTER_FACTOR };
+    }
+  }
 
   // Every run of exactly eight digits is a candidate; a longer run is not a serial.
   const candidates: SerialRead[] = [];
@@ -94,7 +101,8 @@ export function serialFromSymbols(symbols: readonly OcrSymbol[]): SerialReadResu
 
 /** Digits read where a letter must be, and the letter each most often is (O is never printed, so 0 is D). */
 const DIGIT_AS_LETTER: Record<string, string> = { '0': 'D', '1': 'I', '3': 'J', '4': 'A', '5': 'S', '6': 'G', '7': 'T', '8': 'B' };
-/** A letter recovered from a digit's shape is a guess: never sure enough to accept on one frame alone. */
+const J_LIKE = new Set([')']);
+/** A letter recovered from a digit's or a bracket's shape is a guess: never sure enough to accept on one frame alone. */
 const GUESSED_LETTER_FACTOR = 0.7;
 
 function asLetter(chars: OcrSymbol[], index: number): boolean {

@@ -60,3 +60,23 @@ describe('acceptFrame near the last accepted serial', () => {
     expect(run([read('MB12345678C', 0.95), next, next, next])).toEqual(['accept', 'tentative', 'tentative', 'accept']);
   });
 });
+
+describe('acceptFrame over three frames', () => {
+  it('when one spoiled frame falls between two that agree, then the serial is still accepted (two of the last three)', () => {
+    expect(run([read('MB12345678C', 0.7), read('MB12345678C', 0.5), read('MB12345678C', 0.7)])).toEqual(['tentative', 'tentative', 'accept']);
+    expect(run([read('MB12345678C', 0.7), null, read('MB12345678C', 0.7)])).toEqual(['tentative', 'nothing', 'accept']);
+  });
+
+  it('when two agreeing frames are further apart than three, then they do not count together', () => {
+    const other = read('MB87654321D', 0.5);
+    expect(run([read('MB12345678C', 0.7), other, other, read('MB12345678C', 0.7)])).toEqual(['tentative', 'tentative', 'tentative', 'tentative']);
+  });
+
+  it('when the serial has a one-letter prefix (a two-letter one may have lost its thin first letter), then three agreeing frames are needed', () => {
+    const short = read('C38838838K', 0.9);
+    expect(run([short, short, short])).toEqual(['tentative', 'tentative', 'accept']);
+    // A rival with the letter between them resets the count; a very sure frame still accepts alone.
+    expect(run([short, short, read('IC38838838K', 0.9), short])).toEqual(['tentative', 'tentative', 'tentative', 'tentative']);
+    expect(run([read('C38838838K', ACCEPTANCE.single)])).toEqual(['accept']);
+  });
+});

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { ACCEPTANCE } from '../../shared/ocr/acceptance';
 import { serialFromSymbols } from '../../shared/ocr/serial-from-text';
 
 const symbols = (text: string, confidence = 0.95) => [...text].map((ch) => ({ text: ch, confidence }));
@@ -41,5 +42,13 @@ describe('serialFromSymbols', () => {
 
   it('when two serials are in view, then neither is taken', () => {
     expect(serialFromSymbols(symbols('MB12345678C MB87654321D'))).toEqual({ ok: false, reason: 'more than one serial in view' });
+  });
+
+  it('when a bold J before the digits comes back as a bracket, then it is read as the prefix J, as a guess that cannot be accepted alone', () => {
+    const result = serialFromSymbols(symbols(')42861470W'));
+    expect(result.ok && result.read.serial).toBe('J42861470W');
+    expect(result.ok && result.read.confidence).toBeLessThan(ACCEPTANCE.single);
+    // After a letter it is no J (a two-letter prefix never ends in a bracket): no serial shape there.
+    expect(serialFromSymbols(symbols('A)42861470W')).ok).toBe(false);
   });
 });

@@ -1,21 +1,14 @@
 import { greyFromPixels, type GreyImage } from '@/lib/ocr/grey-image';
-import { BAND, BAND_MAX_WIDTH } from './band';
+import { bandRect } from './band';
 
 /**
- * Copies the framing band of the current video frame into a small canvas and returns it as grey bytes.
+ * The fallback for browsers that cannot hand the worker an ImageBitmap of the band (no OffscreenCanvas):
+ * copies the framing band of the current video frame into a small canvas and returns it as grey bytes.
  * Only this band is ever read; the frame stays in memory on the device and is overwritten by the next one.
  */
 export function grabBand(video: HTMLVideoElement, canvas: HTMLCanvasElement): GreyImage | null {
-  const width = video.videoWidth;
-  const height = video.videoHeight;
-  if (!width || !height) return null;
-  const sx = width * BAND.left;
-  const sy = height * BAND.top;
-  const sw = width * BAND.width;
-  const sh = height * BAND.height;
-  const factor = Math.min(1, BAND_MAX_WIDTH / sw);
-  const tw = Math.round(sw * factor);
-  const th = Math.round(sh * factor);
+  if (!video.videoWidth || !video.videoHeight) return null;
+  const { sx, sy, sw, sh, tw, th } = bandRect(video.videoWidth, video.videoHeight);
   if (canvas.width !== tw) canvas.width = tw;
   if (canvas.height !== th) canvas.height = th;
   const context = canvas.getContext('2d', { willReadFrequently: true });

@@ -61,14 +61,27 @@ export function prepare(found: LineImage, variant: Variant): GreyImage {
   return pad(ready, Math.round(variant.lineHeight / 2));
 }
 
+/** Variants that read the same prepared picture (the open one is the grey one without the whitelist). */
+const pictureOf = (variant: Variant) => `${variant.lineHeight}-${variant.binary ? 'binary' : 'grey'}`;
+
+interface VariantRead {
+  read: SerialRead;
+  picture: string;
+}
+
+/** How many different pictures read this serial: the same picture read twice is one witness, not two. */
+const witnesses = (reads: VariantRead[]) => new Set(reads.map((entry) => entry.picture)).size;
+
 /**
  * Reads one serial from a picture of the serial line (a camera band or a still card). Tries the variants
  * in order until one is sure enough to accept alone; when several read a serial, agreement between two
- * raises confidence and a disagreement lowers it, so two different guesses never look certain.
+ * differently prepared pictures raises confidence and a disagreement lowers it, so two different guesses
+ * never look certain. The grey and open variants read the same picture and mostly repeat each other's
+ * mistakes (measured on the degraded cards), so their agreement does not count.
  */
 export async function recogniseSerial(engine: OcrEngine, image: GreyImage, variants: readonly Variant[] = VARIANTS): Promise<Recognition> {
   const tried: string[] = [];
-  const reads: SerialRead[] = [];
+  const reads: VariantRead[] = [];
   let reason: string | null = null;
   const found = findLine(image);
   for (const variant of variants) {
@@ -78,29 +91,28 @@ export async function recogniseSerial(engine: OcrEngine, image: GreyImage, varia
       reason ??= result.reason;
       continue;
     }
-    reads.push(result.read);
+    reads.push({ read: result.read, picture: pictureOf(variant) });
     if (result.read.confidence >= ACCEPTANCE.single && !result.read.trimmed) break;
-    const agreeing = reads.filter((read) => read.serial === result.read.serial);
-    if (agreeing.length >= 2) break;
+    if (witnesses(reads.filter((entry) => entry.read.serial === result.read.serial)) >= 2) break;
   }
   if (reads.length === 0) return { read: null, reason: reason ?? 'nothing read', variants: tried };
   return { read: combine(reads), reason: null, variants: tried };
 }
 
-function combine(reads: SerialRead[]): SerialRead {
-  const bySerial = new Map<string, SerialRead[]>();
-  for (const read of reads) bySerial.set(read.serial, [...(bySerial.get(read.serial) ?? []), read]);
-  const ranked = [...bySerial.values()].sort((a, b) => b.length - a.length || best(b).confidence - best(a).confidence);
+function combine(reads: VariantRead[]): SerialRead {
+  const bySerial = new Map<string, VariantRead[]>();
+  for (const entry of reads) bySerial.set(entry.read.serial, [...(bySerial.get(entry.read.serial) ?? []), entry]);
+  const ranked = [...bySerial.values()].sort((a, b) => witnesses(b) - witnesses(a) || best(b).confidence - best(a).confidence);
   const winners = ranked[0]!;
   const top = best(winners);
   const others = reads.length - winners.length;
-  const digitConfidence = top.digitConfidence.map((_, index) => Math.max(...winners.map((read) => read.digitConfidence[index] ?? 0)));
+  const digitConfidence = top.digitConfidence.map((_, index) => Math.max(...winners.map((entry) => entry.read.digitConfidence[index] ?? 0)));
   let confidence = top.confidence;
-  if (winners.length >= 2) confidence = Math.max(confidence, Math.min(0.99, (confidence + 1) / 2));
+  if (witnesses(winners) >= 2) confidence = Math.max(confidence, Math.min(0.99, (confidence + 1) / 2));
   // A rival reading of the same band means at least one of them is wrong: never accept that alone.
   if (others > 0) confidence = Math.min(confidence, ACCEPTANCE.single - 0.01);
   if (top.trimmed) confidence = Math.min(confidence, ACCEPTANCE.single - 0.01);
   return { ...top, digitConfidence, confidence };
 }
 
-const best = (reads: SerialRead[]) => reads.reduce((a, b) => (b.confidence > a.confidence ? b : a));
+const best = (reads: VariantRead[]) => reads.map((entry) => entry.read).reduce((a, b) => (b.confidence > a.confidence ? b : a));

@@ -1,6 +1,6 @@
 import { type GreyImage, toPgm } from './grey-image';
 import type { OcrEngine } from './recognise';
-import { OCR_ASSET_DIR, symbolsOf, TESSERACT_INIT, tuner } from './tesseract-setup';
+import { symbolsOf, TESSERACT_INIT, tuner } from './tesseract-setup';
 
 export type LoadProgress = (share: number, label: string) => void;
 
@@ -12,13 +12,13 @@ const STAGES: Record<string, [number, number, string]> = {
 };
 
 /**
- * The recogniser in the browser: tesseract.js runs it in a Web Worker, with its core and English data
- * served by our own origin (scripts/web/after-export.ts copies them to /ocr; the service worker keeps them
- * after the first load). tesseract.js itself is loaded with import() so none of it is in the first bundle.
+ * The recogniser in the browser: tesseract.js runs it in a Web Worker of its own, with its core and English
+ * data served by our own origin from `base` (scripts/web/after-export.ts copies them to /ocr; the service
+ * worker keeps them after the first load). This runs inside the camera's worker (camera-worker.ts), so
+ * neither tesseract.js nor any frame ever touches the page's main thread.
  */
-export async function createWebEngine(onProgress: LoadProgress): Promise<OcrEngine & { close(): Promise<void> }> {
+export async function createWebEngine(base: string, onProgress: LoadProgress): Promise<OcrEngine & { close(): Promise<void> }> {
   const { createWorker, OEM } = await import('tesseract.js');
-  const base = `${window.location.origin}/${OCR_ASSET_DIR}`;
   onProgress(0, 'Loading the reader');
   const worker = await createWorker(
     'eng',
