@@ -12,7 +12,7 @@ async function startHunt(page: Page, title: string): Promise<void> {
   await page.getByTestId('hunt-source').fill('Larkspur Valley CU, Mill Street branch');
   await page.getByTestId('start-hunt').click();
   await page.getByTestId('keypad').waitFor();
-  await expect(page.getByTestId('strap-progress').textContent()).resolves.toMatch(/strap 1 · 0 of 100/);
+  await expect.poll(() => page.getByTestId('strap-progress').textContent()).toMatch(/strap 1 · 0 of 100/);
 }
 
 async function tapSerial(page: Page, digits: string): Promise<void> {
@@ -58,7 +58,7 @@ describe.each([
         await page.keyboard.type(serial);
         await page.keyboard.press('Enter');
       }
-      await expect(page.getByTestId('strap-progress').textContent()).resolves.toMatch(/strap 1 · 5 of 100/);
+      await expect.poll(() => page.getByTestId('strap-progress').textContent()).toMatch(/strap 1 · 5 of 100/);
 
       // The network goes away: three more notes, then a reload while still offline.
       await page.route('**/api/**', (route) => route.abort('internetdisconnected'));
@@ -69,7 +69,7 @@ describe.each([
       await page.getByTestId('sync-text').filter({ hasText: /waiting|Offline|Saving/ }).waitFor();
       await page.reload();
       await page.getByTestId('keypad').waitFor();
-      await expect(page.getByTestId('strap-progress').textContent()).resolves.toMatch(/strap 1 · 8 of 100/);
+      await expect.poll(() => page.getByTestId('strap-progress').textContent()).toMatch(/strap 1 · 8 of 100/);
       await page.screenshot({ path: `test-results/screenshots/sift-offline-${name}.png` });
 
       await page.unroute('**/api/**');

@@ -1,4 +1,4 @@
-import { lazy, Suspense, useCallback, useEffect, useMemo, useReducer, useRef, useState } from 'react';
+import { lazy, startTransition, Suspense, useCallback, useEffect, useMemo, useReducer, useRef, useState } from 'react';
 import { ScrollView, StyleSheet, View } from 'react-native';
 import { useFocusEffect } from 'expo-router';
 import { read } from '@shared/engine';
@@ -8,7 +8,7 @@ import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { PageHeading } from '@/components/ui/page-heading';
 import { Text } from '@/components/ui/text';
-import { useScanQueue } from '@/lib/storage/use-scan-queue';
+import { useDeviceScanQueue } from '@/lib/storage/use-scan-queue';
 import { useTheme } from '@/theme/theme-provider';
 import { useLayout } from '@/theme/use-layout';
 import { radius, space } from '@/theme/tokens';
@@ -21,7 +21,7 @@ import { Keypad } from './components/keypad';
 import { ReadingPanel } from './components/reading-panel';
 import { StrapBar } from './components/strap-bar';
 import { StarRunField, parseStarRun } from './components/star-run-field';
-import { SyncBadge } from './components/sync-badge';
+import { QueueBadge, RefusedNotes } from './components/sync-badge';
 import { Trail } from './components/trail';
 import { markEighthKey, measureReadingPainted } from './paint-timing';
 import { nearMissLines } from './reading-view';
@@ -44,7 +44,7 @@ export function SiftScreen() {
   const { isWide } = useLayout();
   const weights = useActiveWeights();
   const watch = useWatchForReading();
-  const { queue, snapshot } = useScanQueue();
+  const queue = useDeviceScanQueue();
   const [choosing, setChoosing] = useState(false);
   const [entry, dispatchEntry] = useReducer(entryReducer, emptyEntry);
   // Handlers read the entry from here, not from the last render: keys can arrive faster than React paints.
@@ -170,20 +170,20 @@ export function SiftScreen() {
     const { read: seen, unsure } = verdict;
     const note = { digits: seen.digits, prefix: seen.prefix, star: seen.star, pulled: false };
     const from: EntrySource = { method: 'camera', confidence: seen.confidence, suffix: seen.suffix, unsure, logged: false };
+    // The camera's updates render as a transition, in slices between frames, so the page never holds a
+    // long task while the camera runs (the keypad's own keys stay urgent).
     if (logged.has(loggedKey(note))) {
-      setCameraStatus(`${seen.serial} is already logged in this hunt; not logged again.`);
+      startTransition(() => setCameraStatus(`${seen.serial} is already logged in this hunt; not logged again.`));
       return;
     }
-    setCameraStatus(null);
-    dispatch({ type: 'restore', entry: note });
-    if (!camera.settings.autoLog || unsure.length > 0) {
-      setSource(from);
-      setCameraStatus(unsure.length ? `Check the marked digits, fix them on the keypad if needed, then log.` : `Tap Log to keep ${seen.serial}.`);
-      return;
-    }
-    setSource({ ...from, logged: true });
-    setFlash(null);
-    void logEntry(note, from);
+    const ask = !camera.settings.autoLog || unsure.length > 0;
+    startTransition(() => {
+      setCameraStatus(ask ? (unsure.length ? `Check the marked digits, fix them on the keypad if needed, then log.` : `Tap Log to keep ${seen.serial}.`) : null);
+      dispatch({ type: 'restore', entry: note });
+      setSource(ask ? from : { ...from, logged: true });
+      if (!ask) setFlash(null);
+    });
+    if (!ask) void logEntry(note, from);
   };
   const handleVerdict = useCallback((verdict: FrameVerdict) => onVerdict.current(verdict), []);
 
@@ -264,7 +264,7 @@ export function SiftScreen() {
       <PageHeading hidden>{`Sift: ${session.hunt.title}`}</PageHeading>
       <View style={styles.headerTop}>
         <Button compact kind="quiet" label={`${session.hunt.title} ▾`} accessibilityLabel={`Hunt: ${session.hunt.title}. Switch hunt`} onPress={() => setChoosing(true)} testID="switch-hunt" />
-        <SyncBadge snapshot={snapshot} onRetry={() => queue?.retryNow()} />
+        <QueueBadge queue={queue} />
       </View>
       <View style={styles.headerTop}>
         {count ? (
@@ -351,11 +351,7 @@ export function SiftScreen() {
   );
 
   const notice = flash ? <Notice tone={flash.tone === 'error' ? 'error' : flash.tone === 'ok' ? 'ok' : 'info'}>{flash.text}</Notice> : null;
-  const rejected = snapshot.rejected.length ? (
-    <Notice tone="error" title="Notes the server refused">
-      {snapshot.rejected.map((item) => `${item.scan.serial}: ${item.error}`).join('\n')}
-    </Notice>
-  ) : null;
+  const rejected = <RefusedNotes queue={queue} />;
 
   if (isWide) {
     return (

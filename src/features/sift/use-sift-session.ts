@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useRef, useState } from 'react';
+import { startTransition, useCallback, useEffect, useRef, useState } from 'react';
 import type { StrapSheet } from '@shared/contracts';
 import { kv } from '@/lib/storage/kv';
 import { chooseStrap, countNote, startCount, uncountLast, type StrapCount, type TrailNote } from './strap-count';
@@ -77,7 +77,9 @@ export function useSiftSession(sheet: SheetStart | undefined) {
 
   const save = useCallback((next: StrapCount) => {
     countRef.current = next;
-    setCount(next);
+    // The count's own ref is current at once; the strap bar and trail may paint a frame later, in slices,
+    // so a note stored while the camera runs never holds the page.
+    startTransition(() => setCount(next));
     return kv.set(countKey(next.huntId), next);
   }, []);
 

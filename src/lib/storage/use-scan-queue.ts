@@ -20,15 +20,23 @@ export function scanQueueFor(userId: string): ScanQueue {
 const idle: QueueSnapshot = { status: 'saved', waiting: 0, rejected: [], lastSyncedAt: null };
 const noop = () => () => undefined;
 
-export function useScanQueue(): { queue: ScanQueue | null; snapshot: QueueSnapshot } {
+/** The signed-in user's queue, retried whenever the network returns; no re-render when its status changes. */
+export function useDeviceScanQueue(): ScanQueue | null {
   const { user } = useSession();
   const queue = user ? scanQueueFor(user.id) : null;
-  const snapshot = useSyncExternalStore(queue?.subscribe ?? noop, queue?.getSnapshot ?? (() => idle), () => idle);
   useEffect(() => {
     if (!queue) return undefined;
     // Notes logged while signed out or offline go up as soon as we can.
     queue.retryNow();
     return onNetworkReturn(() => queue.retryNow());
   }, [queue]);
-  return { queue, snapshot };
+  return queue;
+}
+
+/**
+ * The queue's status (saved, waiting, offline, refused notes). Every stored note changes it, and a store
+ * subscription renders synchronously, so only the small parts that show it should subscribe, never a screen.
+ */
+export function useScanQueueSnapshot(queue: ScanQueue | null): QueueSnapshot {
+  return useSyncExternalStore(queue?.subscribe ?? noop, queue?.getSnapshot ?? (() => idle), () => idle);
 }

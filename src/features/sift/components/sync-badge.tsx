@@ -1,8 +1,26 @@
 import { Pressable, StyleSheet, View } from 'react-native';
 import { Text } from '@/components/ui/text';
-import type { QueueSnapshot } from '@/lib/storage/scan-queue';
+import { Notice } from '@/components/ui/notice';
+import type { QueueSnapshot, ScanQueue } from '@/lib/storage/scan-queue';
+import { useScanQueueSnapshot } from '@/lib/storage/use-scan-queue';
 import { useTheme } from '@/theme/theme-provider';
 import { radius, space } from '@/theme/tokens';
+
+/** The badge for the device's queue, following its status itself so Sift doesn't re-render with each note stored. */
+export function QueueBadge({ queue }: { queue: ScanQueue | null }) {
+  return <SyncBadge snapshot={useScanQueueSnapshot(queue)} onRetry={() => queue?.retryNow()} />;
+}
+
+/** Notes the server refused, each with the reason, under Sift's reading. */
+export function RefusedNotes({ queue }: { queue: ScanQueue | null }) {
+  const { rejected } = useScanQueueSnapshot(queue);
+  if (!rejected.length) return null;
+  return (
+    <Notice tone="error" title="Notes the server refused">
+      {rejected.map((item) => `${item.scan.serial}: ${item.error}`).join('\n')}
+    </Notice>
+  );
+}
 
 /** All saved / n waiting / offline: the hunter always knows whether the server has every note. */
 export function SyncBadge({ snapshot, onRetry }: { snapshot: QueueSnapshot; onRetry(): void }) {
