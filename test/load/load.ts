@@ -12,10 +12,10 @@ import { randomUUID } from 'node:crypto';
 import os from 'node:os';
 import { resolve } from 'node:path';
 import { readFlags, wholeFlag } from '../../scripts/lib/cli-flags';
-import { createDataSource } from '../../server/db/data-source';
 import { ApiProcess } from '../support/fault-rig';
 import { writeDocSection } from '../support/doc-section';
 import { runFaultScenario, type FaultOutcome } from '../support/fault-scenario';
+import { freshDatabase } from './fresh-database';
 import { pacedHunters } from './paced-hunters';
 
 const root = resolve(__dirname, '../..');
@@ -37,7 +37,6 @@ const write = !flags['no-write'];
 const HUNTERS = 50;
 const RATE_PER_HUNTER = wholeFlag(flags.rate, 6, 'rate', USAGE);
 const WORKERS = wholeFlag(flags.workers, 2, 'workers', USAGE);
-const PGPORT = Number(process.env.PGPORT ?? 54329);
 const DB = 'strapsift_load';
 
 function percentile(sorted: number[], p: number): number {
@@ -53,21 +52,6 @@ async function post(url: string, body: unknown, token?: string, from?: string) {
   });
   if (!response.ok) throw new Error(`${url}: ${response.status} ${await response.text()}`);
   return response.json();
-}
-
-async function freshDatabase(): Promise<string> {
-  const adminUrl = process.env.PG_ADMIN_URL ?? `postgres://postgres@127.0.0.1:${PGPORT}/postgres`;
-  const admin = createDataSource(adminUrl);
-  await admin.initialize();
-  await admin.query(`DROP DATABASE IF EXISTS ${DB} WITH (FORCE)`);
-  await admin.query(`CREATE DATABASE ${DB}`);
-  await admin.destroy();
-  const url = adminUrl.replace(/\/[^/]*$/, `/${DB}`);
-  const migrator = createDataSource(url);
-  await migrator.initialize();
-  await migrator.runMigrations();
-  await migrator.destroy();
-  return url;
 }
 
 interface LoadFigures {
@@ -168,7 +152,7 @@ const phase = (name: string) => console.error(`${new Date().toISOString().slice(
 const hunterAddress = (index: number) => `10.1.${Math.floor(index / 250)}.${(index % 250) + 1}`;
 
 async function runLoad(): Promise<LoadFigures> {
-  const url = await freshDatabase();
+  const url = await freshDatabase(DB);
   const api = apiProcess(url, WORKERS);
   await api.start();
   try {

@@ -15,6 +15,7 @@ import { setTimeout as sleep } from 'node:timers/promises';
 import { readFlags, wholeFlag } from '../../scripts/lib/cli-flags';
 import { createDataSource } from '../../server/db/data-source';
 import { ApiProcess } from '../support/fault-rig';
+import { freshDatabase } from './fresh-database';
 import { pacedHunters } from './paced-hunters';
 import { summariseProfile } from './profile-summary';
 
@@ -28,21 +29,6 @@ const DB = 'strapsift_profile';
 const HUNTERS = 50;
 const profileDir = resolve(root, '.data/profile');
 const countFile = resolve(profileDir, 'sql-counts.json');
-
-async function freshDatabase(): Promise<string> {
-  const adminUrl = process.env.PG_ADMIN_URL ?? `postgres://postgres@127.0.0.1:${process.env.PGPORT ?? 54329}/postgres`;
-  const admin = createDataSource(adminUrl);
-  await admin.initialize();
-  await admin.query(`DROP DATABASE IF EXISTS ${DB} WITH (FORCE)`);
-  await admin.query(`CREATE DATABASE ${DB}`);
-  await admin.destroy();
-  const url = adminUrl.replace(/\/[^/]*$/, `/${DB}`);
-  const migrator = createDataSource(url);
-  await migrator.initialize();
-  await migrator.runMigrations();
-  await migrator.destroy();
-  return url;
-}
 
 async function post(url: string, body: unknown, token?: string, from?: string) {
   const response = await fetch(url, {
@@ -99,7 +85,7 @@ const pct = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, 
 async function main(): Promise<void> {
   rmSync(profileDir, { recursive: true, force: true });
   mkdirSync(profileDir, { recursive: true });
-  const url = await freshDatabase();
+  const url = await freshDatabase(DB);
   const api = new ApiProcess(port, {
     DATABASE_URL: url,
     JWT_SECRET: 'profile-run-secret-0123456789-abcdefghijklmnopq',
