@@ -15,7 +15,7 @@ import { readFlags, wholeFlag } from '../../scripts/lib/cli-flags';
 import { ApiProcess } from '../support/fault-rig';
 import { writeDocSection } from '../support/doc-section';
 import { runFaultScenario, type FaultOutcome } from '../support/fault-scenario';
-import { freshDatabase } from './fresh-database';
+import { freshDatabase, percentile, post } from './rig';
 import { pacedHunters } from './paced-hunters';
 
 const root = resolve(__dirname, '../..');
@@ -38,21 +38,6 @@ const HUNTERS = 50;
 const RATE_PER_HUNTER = wholeFlag(flags.rate, 6, 'rate', USAGE);
 const WORKERS = wholeFlag(flags.workers, 2, 'workers', USAGE);
 const DB = 'strapsift_load';
-
-function percentile(sorted: number[], p: number): number {
-  if (!sorted.length) return NaN;
-  return sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))];
-}
-
-async function post(url: string, body: unknown, token?: string, from?: string) {
-  const response = await fetch(url, {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json', ...(token ? { Authorization: `Bearer ${token}` } : {}), ...(from ? { 'X-Forwarded-For': from } : {}) },
-    body: JSON.stringify(body),
-  });
-  if (!response.ok) throw new Error(`${url}: ${response.status} ${await response.text()}`);
-  return response.json();
-}
 
 interface LoadFigures {
   seconds: number;

@@ -15,7 +15,7 @@ import { setTimeout as sleep } from 'node:timers/promises';
 import { readFlags, wholeFlag } from '../../scripts/lib/cli-flags';
 import { createDataSource } from '../../server/db/data-source';
 import { ApiProcess } from '../support/fault-rig';
-import { freshDatabase } from './fresh-database';
+import { freshDatabase, percentile, post } from './rig';
 import { pacedHunters } from './paced-hunters';
 import { summariseProfile } from './profile-summary';
 
@@ -29,16 +29,6 @@ const DB = 'strapsift_profile';
 const HUNTERS = 50;
 const profileDir = resolve(root, '.data/profile');
 const countFile = resolve(profileDir, 'sql-counts.json');
-
-async function post(url: string, body: unknown, token?: string, from?: string) {
-  const response = await fetch(url, {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json', ...(token ? { Authorization: `Bearer ${token}` } : {}), ...(from ? { 'X-Forwarded-For': from } : {}) },
-    body: JSON.stringify(body),
-  });
-  if (!response.ok) throw new Error(`${url}: ${response.status} ${await response.text()}`);
-  return response.json();
-}
 
 type Counts = Record<string, { count: number; ms: number }>;
 
@@ -79,8 +69,6 @@ async function postgresPids(adminUrl: string): Promise<number[]> {
   await admin.destroy();
   return rows.map((row) => row.pid);
 }
-
-const pct = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))] ?? NaN;
 
 async function main(): Promise<void> {
   rmSync(profileDir, { recursive: true, force: true });
@@ -163,10 +151,10 @@ async function main(): Promise<void> {
     console.log(`  CPU over ${wall.toFixed(1)} s: app ${perRequest(app)} (${((100 * appSystem) / app).toFixed(0)}% of it in the kernel), PostgreSQL ${perRequest(postgres)} over ${pgPids.length} processes, generator ${perRequest(generator)}; load average ${readFileSync('/proc/loadavg', 'utf8').split(' ').slice(0, 3).join(' ')}`);
     for (const [kind, values] of Object.entries(paced.latencies)) {
       const sorted = [...values].sort((a, b) => a - b);
-      console.log(`  ${kind.padEnd(7)} n=${sorted.length} p50 ${pct(sorted, 50).toFixed(1)} ms  p95 ${pct(sorted, 95).toFixed(1)} ms`);
+      console.log(`  ${kind.padEnd(7)} n=${sorted.length} p50 ${percentile(sorted, 50).toFixed(1)} ms  p95 ${percentile(sorted, 95).toFixed(1)} ms`);
     }
     const all = Object.values(paced.latencies).flat().sort((a, b) => a - b);
-    console.log(`  all     p50 ${pct(all, 50).toFixed(1)} ms  p95 ${pct(all, 95).toFixed(1)} ms`);
+    console.log(`  all     p50 ${percentile(all, 50).toFixed(1)} ms  p95 ${percentile(all, 95).toFixed(1)} ms`);
   } finally {
     await api.stop('SIGTERM');
   }
