@@ -10,10 +10,12 @@ export interface ButtonProps extends Omit<PressableProps, 'style' | 'children'> 
   kind?: Kind;
   busy?: boolean;
   style?: StyleProp<ViewStyle>;
+  /** One line, cut with an ellipsis: for a label that may be long (a hunt's title) in a row that must not overflow. */
+  truncate?: boolean;
   compact?: boolean;
 }
 
-export function Button({ label, kind = 'primary', busy, disabled, style, compact, ...rest }: ButtonProps) {
+export function Button({ label, kind = 'primary', busy, disabled, style, compact, truncate, ...rest }: ButtonProps) {
   const theme = useTheme();
   const palette = {
     primary: { bg: theme.brand, fg: theme.onBrand, border: theme.brand },
@@ -40,7 +42,7 @@ export function Button({ label, kind = 'primary', busy, disabled, style, compact
       {...rest}
     >
       {busy ? <ActivityIndicator color={palette.fg} size="small" /> : null}
-      <Text variant="label" style={{ color: palette.fg }}>
+      <Text variant="label" style={{ color: palette.fg }} numberOfLines={truncate ? 1 : undefined}>
         {label}
       </Text>
     </Pressable>

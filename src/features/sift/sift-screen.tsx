@@ -263,7 +263,7 @@ export function SiftScreen() {
     <View style={styles.header}>
       <PageHeading hidden>{`Sift: ${session.hunt.title}`}</PageHeading>
       <View style={styles.headerTop}>
-        <Button compact kind="quiet" label={`${session.hunt.title} ▾`} accessibilityLabel={`Hunt: ${session.hunt.title}. Switch hunt`} onPress={() => setChoosing(true)} testID="switch-hunt" />
+        <Button compact kind="quiet" label={`${session.hunt.title} ▾`} accessibilityLabel={`Hunt: ${session.hunt.title}. Switch hunt`} onPress={() => setChoosing(true)} testID="switch-hunt" truncate style={styles.huntTitle} />
         <QueueBadge queue={queue} />
       </View>
       <View style={styles.headerTop}>
@@ -415,6 +415,8 @@ const styles = StyleSheet.create({
   wideRight: { flex: 1, borderLeftWidth: 1 },
   wideRightContent: { padding: space.xl, gap: space.lg, maxWidth: 760 },
   headerActions: { flexDirection: 'row', gap: space.sm },
+  // A long hunt title gives way (with an ellipsis) so the sync badge beside it stays whole on a phone.
+  huntTitle: { flexShrink: 1, minWidth: 0 },
   cameraArea: { gap: space.sm },
   cameraActions: { flexDirection: 'row', gap: space.sm },
   cameraLog: { flex: 1 },
